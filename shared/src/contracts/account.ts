@@ -1,0 +1,62 @@
+export const ROLES = ['baker', 'instructor', 'admin'] as const;
+export type Role = (typeof ROLES)[number];
+
+export const UNIT_SYSTEMS = ['metric', 'us'] as const;
+export type UnitSystem = (typeof UNIT_SYSTEMS)[number];
+
+export const TEMPERATURE_UNITS = ['C', 'F'] as const;
+export type TemperatureUnit = (typeof TEMPERATURE_UNITS)[number];
+
+/**
+ * Password length limits. OWASP ASVS 5.0 6.2.1 asks for at least 8 characters and 6.2.9 for at
+ * least 64 to be accepted; we accept up to 128 so passphrases fit. No composition rules (6.2.5).
+ */
+export const PASSWORD_MIN_LENGTH = 8;
+export const PASSWORD_MAX_LENGTH = 128;
+export const DISPLAY_NAME_MAX_LENGTH = 80;
+export const EMAIL_MAX_LENGTH = 254;
+
+export interface SignUpRequest {
+  email: string;
+  displayName: string;
+  password: string;
+}
+
+export interface SignInRequest {
+  email: string;
+  password: string;
+}
+
+export interface ChangePasswordRequest {
+  currentPassword: string;
+  newPassword: string;
+}
+
+export interface UpdateAccountRequest {
+  displayName?: string;
+  unitSystem?: UnitSystem;
+  temperatureUnit?: TemperatureUnit;
+  /** An IANA time zone name, e.g. `Europe/London`. */
+  timeZone?: string;
+}
+
+export interface Account {
+  id: string;
+  email: string;
+  displayName: string;
+  role: Role;
+  unitSystem: UnitSystem;
+  temperatureUnit: TemperatureUnit;
+  timeZone: string;
+  /** ISO 8601, UTC. */
+  createdAt: string;
+}
+
+export interface AccountListResponse {
+  items: Account[];
+  total: number;
+}
+
+export interface UpdateRoleRequest {
+  role: Role;
+}
