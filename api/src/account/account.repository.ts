@@ -1,0 +1,86 @@
+import { Inject, Injectable } from '@nestjs/common';
+import type { Role, TemperatureUnit, UnitSystem } from '@peakwise/shared';
+import { sql, type Selectable } from 'kysely';
+import { DATABASE } from '../db/database.module.js';
+import type { Database } from '../db/database.js';
+import type { Account } from '../db/types.js';
+
+export type AccountRecord = Selectable<Account>;
+
+export interface NewAccount {
+  email: string;
+  displayName: string;
+  passwordHash: string;
+  role?: Role;
+}
+
+export interface AccountChanges {
+  displayName?: string;
+  unitSystem?: UnitSystem;
+  temperatureUnit?: TemperatureUnit;
+  timeZone?: string;
+  role?: Role;
+  passwordHash?: string;
+}
+
+/** The only place SQL about accounts is written. */
+@Injectable()
+export class AccountRepository {
+  constructor(@Inject(DATABASE) private readonly db: Database) {}
+
+  findById(id: string): Promise<AccountRecord | undefined> {
+    return this.db.selectFrom('account').selectAll().where('id', '=', id).executeTakeFirst();
+  }
+
+  findByEmail(email: string): Promise<AccountRecord | undefined> {
+    return this.db.selectFrom('account').selectAll().where('email', '=', email).executeTakeFirst();
+  }
+
+  /** Inserts unless the e-mail is taken; undefined tells the caller it was. */
+  insert(account: NewAccount): Promise<AccountRecord | undefined> {
+    return this.db
+      .insertInto('account')
+      .values(account)
+      .onConflict((oc) => oc.column('email').doNothing())
+      .returningAll()
+      .executeTakeFirst();
+  }
+
+  update(id: string, changes: AccountChanges): Promise<AccountRecord | undefined> {
+    return this.db
+      .updateTable('account')
+      .set({ ...changes, updatedAt: new Date() })
+      .where('id', '=', id)
+      .returningAll()
+      .executeTakeFirst();
+  }
+
+  async list(limit: number, offset: number): Promise<{ items: AccountRecord[]; total: number }> {
+    const [items, count] = await Promise.all([
+      this.db.selectFrom('account').selectAll().orderBy('createdAt').orderBy('id').limit(limit).offset(offset).execute(),
+      this.db.selectFrom('account').select((eb) => eb.fn.countAll<string>().as('n')).executeTakeFirstOrThrow(),
+    ]);
+    return { items, total: Number(count.n) };
+  }
+
+  async count(): Promise<number> {
+    const row = await this.db.selectFrom('account').select((eb) => eb.fn.countAll<string>().as('n')).executeTakeFirstOrThrow();
+    return Number(row.n);
+  }
+
+  async countByRole(role: Role): Promise<number> {
+    const row = await this.db
+      .selectFrom('account')
+      .select((eb) => eb.fn.countAll<string>().as('n'))
+      .where('role', '=', role)
+      .executeTakeFirstOrThrow();
+    return Number(row.n);
+  }
+
+  /** Ends every session of an account except, optionally, the one making the request. */
+  async endSessions(accountId: string, exceptSid?: string): Promise<void> {
+    let query = this.db.deleteFrom('session').where(sql<string>`sess ->> 'accountId'`, '=', accountId);
+    if (exceptSid) query = query.where('sid', '<>', exceptSid);
+    await query.execute();
+  }
+}

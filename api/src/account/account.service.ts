@@ -1,0 +1,73 @@
+import { ConflictException, Injectable, NotFoundException } from '@nestjs/common';
+import type { Account, AccountListResponse, ChangePasswordRequest, Role, SignUpRequest, UpdateAccountRequest } from '@peakwise/shared';
+import { PasswordService } from '../auth/password.service.js';
+import { passwordProblem } from '../auth/password-policy.js';
+import { fieldError } from '../common/validation.js';
+import { toAccount } from './account.mapper.js';
+import { AccountRepository, type AccountRecord } from './account.repository.js';
+
+@Injectable()
+export class AccountService {
+  constructor(
+    private readonly accounts: AccountRepository,
+    private readonly passwords: PasswordService,
+  ) {}
+
+  async signUp(request: SignUpRequest, role: Role = 'baker'): Promise<AccountRecord> {
+    const problem = passwordProblem(request.password, [request.email, request.displayName]);
+    if (problem) throw fieldError('password', problem);
+    const passwordHash = await this.passwords.hash(request.password);
+    const created = await this.accounts.insert({ email: request.email, displayName: request.displayName, passwordHash, role });
+    if (!created) {
+      throw new ConflictException({
+        message: 'An account with this e-mail already exists. Sign in instead?',
+        details: [{ field: 'email', message: 'This e-mail is already registered.' }],
+      });
+    }
+    return created;
+  }
+
+  /** The account these credentials open, or null. Takes the same time whether or not the e-mail exists. */
+  async authenticate(email: string, password: string): Promise<AccountRecord | null> {
+    const account = await this.accounts.findByEmail(email);
+    if (!account) return this.passwords.verifyNothing(password).then(() => null);
+    return (await this.passwords.verify(password, account.passwordHash)) ? account : null;
+  }
+
+  async update(account: AccountRecord, changes: UpdateAccountRequest): Promise<Account> {
+    const updated = await this.accounts.update(account.id, changes);
+    if (!updated) throw new NotFoundException('This account no longer exists.');
+    return toAccount(updated);
+  }
+
+  /** Changes the password and signs out every other device of this account. */
+  async changePassword(account: AccountRecord, request: ChangePasswordRequest, currentSid: string): Promise<void> {
+    if (!(await this.passwords.verify(request.currentPassword, account.passwordHash))) {
+      throw fieldError('currentPassword', 'This is not your current password.');
+    }
+    const problem = passwordProblem(request.newPassword, [account.email, account.displayName]);
+    if (problem) throw fieldError('newPassword', problem);
+    await this.accounts.update(account.id, { passwordHash: await this.passwords.hash(request.newPassword) });
+    await this.accounts.endSessions(account.id, currentSid);
+  }
+
+  async list(limit: number, offset: number): Promise<AccountListResponse> {
+    const { items, total } = await this.accounts.list(limit, offset);
+    return { items: items.map(toAccount), total };
+  }
+
+  async setRole(id: string, role: Role): Promise<Account> {
+    const target = await this.accounts.findById(id);
+    if (!target) throw new NotFoundException('No account with this id.');
+    if (target.role === 'admin' && role !== 'admin' && (await this.accounts.countByRole('admin')) <= 1) {
+      // Otherwise nobody could ever manage roles again short of editing the database.
+      throw new ConflictException({
+        message: 'This is the last admin account; make someone else admin first.',
+        details: [{ field: 'role', message: 'At least one admin must remain.' }],
+      });
+    }
+    const updated = await this.accounts.update(id, { role });
+    if (!updated) throw new NotFoundException('No account with this id.');
+    return toAccount(updated);
+  }
+}

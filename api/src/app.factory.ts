@@ -1,0 +1,105 @@
+import 'reflect-metadata';
+import { randomUUID } from 'node:crypto';
+import fastifyCookie from '@fastify/cookie';
+import helmet from '@fastify/helmet';
+import fastifySession from '@fastify/session';
+import { NestFactory } from '@nestjs/core';
+import { FastifyAdapter, type NestFastifyApplication } from '@nestjs/platform-fastify';
+import { DocumentBuilder, SwaggerModule } from '@nestjs/swagger';
+import connectPgSimple from 'connect-pg-simple';
+import expressSession from 'express-session';
+import type { Logger } from 'pino';
+import { AppModule } from './app.module.js';
+import { ErrorFilter } from './common/error.filter.js';
+import { createValidationPipe } from './common/validation.js';
+import type { AppConfig } from './config.js';
+import { openDatabase } from './db/database.js';
+import { NestPinoLogger, createLogger } from './logger.js';
+
+const FOURTEEN_DAYS_MS = 14 * 24 * 60 * 60 * 1000;
+
+export interface CreatedApp {
+  app: NestFastifyApplication;
+  logger: Logger;
+}
+
+/** Builds the whole HTTP application without listening: main.ts listens, tests use inject(). */
+export async function createApp(config: AppConfig, logger: Logger = createLogger(config.logLevel)): Promise<CreatedApp> {
+  const database = openDatabase(config.databaseUrl);
+  const adapter = new FastifyAdapter({
+    loggerInstance: logger,
+    // Honour a caller's request id (a proxy, a test) or make one, so log lines can be followed.
+    requestIdHeader: 'x-request-id',
+    genReqId: () => randomUUID(),
+    bodyLimit: 1024 * 1024,
+  });
+  const app = await NestFactory.create<NestFastifyApplication>(AppModule.forRoot(config, database), adapter, {
+    logger: new NestPinoLogger(logger),
+    // Fastify's own JSON parser is all we accept; without Nest's extra parsers any other
+    // content type is answered with 415.
+    bodyParser: false,
+  });
+  const fastify = app.getHttpAdapter().getInstance();
+  fastify.removeContentTypeParser('text/plain');
+  fastify.addHook('onSend', async (request, reply) => {
+    reply.header('x-request-id', request.id);
+  });
+
+  await app.register(helmet as never, {
+    contentSecurityPolicy: {
+      directives: {
+        defaultSrc: ["'self'"],
+        // MUI (emotion) injects style tags at run time.
+        styleSrc: ["'self'", "'unsafe-inline'"],
+        imgSrc: ["'self'", 'data:', 'blob:'],
+        fontSrc: ["'self'", 'data:'],
+        scriptSrc: ["'self'"],
+        connectSrc: ["'self'"],
+        upgradeInsecureRequests: null,
+      },
+    },
+  });
+  await app.register(fastifyCookie as never);
+  const PgStore = connectPgSimple(expressSession);
+  const store = new PgStore({
+    pool: database.pool,
+    tableName: 'session',
+    createTableIfMissing: false,
+    pruneSessionInterval: config.sessionPruneSeconds > 0 ? config.sessionPruneSeconds : false,
+  });
+  await app.register(fastifySession as never, {
+    secret: config.sessionSecret,
+    cookieName: 'peakwise.sid',
+    store,
+    saveUninitialized: false,
+    // Every response pushes the expiry out again: 14 days idle, not 14 days after sign-in.
+    rolling: true,
+    cookie: { httpOnly: true, sameSite: 'lax', secure: 'auto', path: '/', maxAge: FOURTEEN_DAYS_MS },
+  });
+
+  app.setGlobalPrefix('api');
+  app.useGlobalPipes(createValidationPipe());
+  app.useGlobalFilters(new ErrorFilter(logger, config.webDist));
+
+  const document = SwaggerModule.createDocument(
+    app,
+    new DocumentBuilder()
+      .setTitle('Peakwise API')
+      .setDescription('Sourdough culture logbook: accounts now; cultures, feedings and predictions to come.')
+      .setVersion('0.1.0')
+      .addCookieAuth('peakwise.sid')
+      .build(),
+  );
+  SwaggerModule.setup('api/docs', app, document, { jsonDocumentUrl: 'api/docs/openapi.json' });
+
+  if (config.webDist) {
+    app.useStaticAssets({ root: config.webDist, prefix: '/' });
+  }
+
+  fastify.addHook('onClose', async () => {
+    store.close();
+    await database.db.destroy();
+  });
+  await app.init();
+  return { app, logger };
+}

@@ -1,0 +1,22 @@
+import { Module, type DynamicModule } from '@nestjs/common';
+import { APP_GUARD } from '@nestjs/core';
+import { AccountModule } from './account/account.module.js';
+import { AdminModule } from './admin/admin.module.js';
+import { AuthModule } from './auth/auth.module.js';
+import { SessionGuard } from './common/session.guard.js';
+import { ConfigModule } from './config.module.js';
+import type { AppConfig } from './config.js';
+import { DatabaseModule } from './db/database.module.js';
+import type { DatabaseHandle } from './db/database.js';
+import { HealthModule } from './health/health.module.js';
+
+@Module({})
+export class AppModule {
+  static forRoot(config: AppConfig, database: DatabaseHandle): DynamicModule {
+    return {
+      module: AppModule,
+      imports: [ConfigModule.forRoot(config), DatabaseModule.forRoot(database), AccountModule, AuthModule, AdminModule, HealthModule],
+      providers: [{ provide: APP_GUARD, useClass: SessionGuard }],
+    };
+  }
+}

@@ -1,0 +1,55 @@
+import { Body, Controller, HttpCode, Post, Req, UseGuards } from '@nestjs/common';
+import { ApiBody, ApiCreatedResponse, ApiNoContentResponse, ApiOkResponse, ApiTags, ApiUnauthorizedResponse } from '@nestjs/swagger';
+import type { Account } from '@peakwise/shared';
+import type { FastifyRequest } from 'fastify';
+import { toAccount } from '../account/account.mapper.js';
+import type { AccountRecord } from '../account/account.repository.js';
+import { AccountService } from '../account/account.service.js';
+import { AccountView } from '../account/dto/account.view.js';
+import { Public } from '../common/auth.decorators.js';
+import { SignInDto } from './dto/sign-in.dto.js';
+import { SignUpDto } from './dto/sign-up.dto.js';
+import { LocalAuthGuard } from './local-auth.guard.js';
+
+/** Starts a fresh session for the account: a new id, so a session id planted before sign-in is useless. */
+async function startSession(req: FastifyRequest, account: AccountRecord): Promise<void> {
+  await req.session.regenerate();
+  req.session.set('accountId', account.id);
+  await req.session.save();
+}
+
+@ApiTags('auth')
+@Controller('auth')
+export class AuthController {
+  constructor(private readonly accounts: AccountService) {}
+
+  @Public()
+  @Post('sign-up')
+  @ApiCreatedResponse({ type: AccountView, description: 'Account created and signed in' })
+  async signUp(@Body() body: SignUpDto, @Req() req: FastifyRequest): Promise<Account> {
+    const account = await this.accounts.signUp(body);
+    await startSession(req, account);
+    return toAccount(account);
+  }
+
+  @Public()
+  @UseGuards(LocalAuthGuard)
+  @Post('sign-in')
+  @HttpCode(200)
+  @ApiBody({ type: SignInDto })
+  @ApiOkResponse({ type: AccountView })
+  @ApiUnauthorizedResponse({ description: 'E-mail or password is incorrect' })
+  async signIn(@Req() req: FastifyRequest & { user: AccountRecord }): Promise<Account> {
+    await startSession(req, req.user);
+    return toAccount(req.user);
+  }
+
+  /** Public so that signing out with an expired session still succeeds. */
+  @Public()
+  @Post('sign-out')
+  @HttpCode(204)
+  @ApiNoContentResponse()
+  async signOut(@Req() req: FastifyRequest): Promise<void> {
+    if (req.session.get('accountId')) await req.session.destroy();
+  }
+}

@@ -1,0 +1,24 @@
+import { Transform } from 'class-transformer';
+import { registerDecorator, type ValidationOptions } from 'class-validator';
+
+/** Trims surrounding white space from a string field before it is validated. */
+export const Trim = () => Transform(({ value }: { value: unknown }) => (typeof value === 'string' ? value.trim() : value));
+
+/** E-mail addresses compare case-blind: keep one spelling. */
+export const NormaliseEmail = () =>
+  Transform(({ value }: { value: unknown }) => (typeof value === 'string' ? value.trim().toLowerCase() : value));
+
+const zones = new Set(Intl.supportedValuesOf('timeZone'));
+zones.add('UTC');
+
+/** An IANA time zone name this runtime knows, e.g. `Europe/Berlin`. */
+export function IsTimeZone(options?: ValidationOptions) {
+  return (object: object, propertyName: string) =>
+    registerDecorator({
+      name: 'isTimeZone',
+      target: object.constructor,
+      propertyName,
+      options: { message: 'Choose a time zone from the list, e.g. Europe/London.', ...options },
+      validator: { validate: (value: unknown) => typeof value === 'string' && zones.has(value) },
+    });
+}

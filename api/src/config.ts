@@ -1,0 +1,42 @@
+/** Everything the API reads from its environment, checked once at start-up. */
+export interface AppConfig {
+  databaseUrl: string;
+  host: string;
+  port: number;
+  sessionSecret: string;
+  /** Folder of the built web app to serve beside /api, or null to serve the API alone. */
+  webDist: string | null;
+  logLevel: string;
+  /** log2 of scrypt's N. 17 by default (OWASP's minimum for scrypt); tests lower it for speed. */
+  passwordHashCost: number;
+  /** Delete expired sessions every this many seconds; 0 turns pruning off (tests). */
+  sessionPruneSeconds: number;
+}
+
+function required(env: NodeJS.ProcessEnv, name: string): string {
+  const value = env[name];
+  if (!value) throw new Error(`${name} is not set`);
+  return value;
+}
+
+export function loadConfig(env: NodeJS.ProcessEnv = process.env): AppConfig {
+  const sessionSecret = required(env, 'SESSION_SECRET');
+  // @fastify/session signs cookies with it and insists on at least 32 characters.
+  if (sessionSecret.length < 32) throw new Error('SESSION_SECRET must be at least 32 characters');
+  const passwordHashCost = Number(env.PASSWORD_HASH_COST ?? 17);
+  if (!Number.isInteger(passwordHashCost) || passwordHashCost < 14 || passwordHashCost > 20) {
+    throw new Error('PASSWORD_HASH_COST must be an integer from 14 to 20');
+  }
+  return {
+    databaseUrl: required(env, 'DATABASE_URL'),
+    host: env.HOST ?? '127.0.0.1',
+    port: Number(env.PORT ?? 3000),
+    sessionSecret,
+    webDist: env.WEB_DIST || null,
+    logLevel: env.LOG_LEVEL ?? 'info',
+    passwordHashCost,
+    sessionPruneSeconds: Number(env.SESSION_PRUNE_SECONDS ?? 900),
+  };
+}
+
+export const APP_CONFIG = Symbol('APP_CONFIG');

@@ -1,0 +1,19 @@
+import { CamelCasePlugin, Kysely, PostgresDialect } from 'kysely';
+import pg from 'pg';
+import type { DB } from './types.js';
+
+export type Database = Kysely<DB>;
+
+export interface DatabaseHandle {
+  db: Database;
+  pool: pg.Pool;
+}
+
+/** One pool for the whole process: Kysely and the session store share it. */
+export function openDatabase(connectionString: string, max = 10): DatabaseHandle {
+  const pool = new pg.Pool({ connectionString, max, connectionTimeoutMillis: 5000 });
+  // An idle client that loses its server (PostgreSQL restarted) must not crash the process.
+  pool.on('error', () => undefined);
+  const db = new Kysely<DB>({ dialect: new PostgresDialect({ pool }), plugins: [new CamelCasePlugin()] });
+  return { db, pool };
+}

@@ -1,0 +1,115 @@
+#!/usr/bin/env node
+// `npm start`: installs what is missing, starts a project-local PostgreSQL (unless DATABASE_URL is
+// set), applies migrations, seeds the demo scenario into an empty database, builds, and serves the
+// API and the web app from one port. Ctrl-C stops everything this script started.
+import { spawn } from 'node:child_process';
+import { join } from 'node:path';
+import { ensureNodeModules, ensurePostgres } from './lib/install.mjs';
+import { LocalCluster, clusterParent } from './lib/postgres.mjs';
+import { apiEntry, buildIfStale, cliEntry, dataDir, ensureDataDir, persistentSecret, root, webDist } from './lib/project.mjs';
+import { readDemoAccounts } from './lib/demo.mjs';
+import { fail, log, run } from './lib/run.mjs';
+
+const port = Number(process.env.PORT ?? 3000);
+const host = process.env.HOST ?? '127.0.0.1';
+const pgPort = Number(process.env.PGPORT ?? 54329);
+
+ensureNodeModules(root);
+ensureDataDir();
+
+let cluster = null;
+let databaseUrl = process.env.DATABASE_URL;
+if (!databaseUrl) {
+  const parent = clusterParent(root);
+  cluster = new LocalCluster({
+    bin: ensurePostgres(),
+    dir: join(parent, 'pg'),
+    secretsFile: join(parent, 'pg-secret.json'),
+    port: pgPort,
+  });
+  cluster.init();
+  await cluster.start();
+  cluster.ensureDatabase('peakwise');
+  databaseUrl = cluster.url('peakwise');
+  log(`PostgreSQL on 127.0.0.1:${pgPort} (data in ${cluster.dir})`);
+} else {
+  log('DATABASE_URL is set: using that database, starting no local PostgreSQL');
+}
+
+let api = null;
+let stopping = false;
+function stopAll(code) {
+  if (stopping) return;
+  stopping = true;
+  const finish = () => {
+    cluster?.stop();
+    process.exit(code);
+  };
+  if (api && api.exitCode === null) {
+    api.once('exit', finish);
+    api.kill('SIGTERM');
+    setTimeout(() => api.kill('SIGKILL'), 10_000).unref();
+  } else {
+    finish();
+  }
+}
+process.on('SIGINT', () => stopAll(0));
+process.on('SIGTERM', () => stopAll(0));
+
+try {
+  buildIfStale();
+  const env = { ...process.env, DATABASE_URL: databaseUrl, PEAKWISE_DATA_DIR: dataDir };
+  run('node', [cliEntry('migrate')], { env });
+  run('node', [cliEntry('seed')], { env });
+} catch (error) {
+  process.stderr.write(`[peakwise] ${error.message}\n`);
+  stopAll(1);
+}
+
+if (!stopping) {
+  api = spawn('node', [apiEntry], {
+    stdio: 'inherit',
+    env: {
+      ...process.env,
+      DATABASE_URL: databaseUrl,
+      PORT: String(port),
+      HOST: host,
+      SESSION_SECRET: process.env.SESSION_SECRET ?? persistentSecret('session'),
+      WEB_DIST: webDist,
+      NODE_ENV: process.env.NODE_ENV ?? 'production',
+    },
+  });
+  api.on('exit', (code) => {
+    if (!stopping) {
+      process.stderr.write(`[peakwise] the API stopped (exit ${code}); shutting down\n`);
+      stopAll(code || 1);
+    }
+  });
+  api.on('error', (error) => fail(`could not start the API: ${error.message}`));
+  await waitForHealth(`http://${host}:${port}/api/health`);
+  if (!stopping) printBanner(`http://${host}:${port}`);
+}
+
+async function waitForHealth(url) {
+  for (let i = 0; i < 120 && !stopping; i++) {
+    try {
+      const response = await fetch(url);
+      if (response.ok) return;
+    } catch {
+      // not listening yet
+    }
+    await new Promise((resolve) => setTimeout(resolve, 250));
+  }
+}
+
+function printBanner(url) {
+  const lines = ['', `Peakwise is running at ${url}`, ''];
+  const accounts = readDemoAccounts(dataDir);
+  if (accounts.length) {
+    lines.push('Demo sign-ins (the Larkspur Community Kitchen class):');
+    for (const a of accounts) lines.push(`  ${a.role.padEnd(10)} ${a.email.padEnd(28)} ${a.password ?? '(password set earlier)'}`);
+    lines.push('');
+  }
+  lines.push('Press Ctrl-C to stop (PostgreSQL stops too; your data stays in .data).', '');
+  process.stdout.write(lines.join('\n') + '\n');
+}
