@@ -6,7 +6,16 @@ import { spawn } from 'node:child_process';
 import { join } from 'node:path';
 import { ensureNodeModules, ensurePostgres } from './lib/install.mjs';
 import { LocalCluster, clusterParent } from './lib/postgres.mjs';
-import { apiEntry, buildIfStale, cliEntry, dataDir, ensureDataDir, persistentSecret, root, webDist } from './lib/project.mjs';
+import {
+  apiEntry,
+  buildIfStale,
+  cliEntry,
+  dataDir,
+  ensureDataDir,
+  persistentSecret,
+  root,
+  webDist,
+} from './lib/project.mjs';
 import { readDemoAccounts } from './lib/demo.mjs';
 import { fail, log, run } from './lib/run.mjs';
 
@@ -107,7 +116,8 @@ function printBanner(url) {
   const accounts = readDemoAccounts(dataDir);
   if (accounts.length) {
     lines.push('Demo sign-ins (the Larkspur Community Kitchen class):');
-    for (const a of accounts) lines.push(`  ${a.role.padEnd(10)} ${a.email.padEnd(28)} ${a.password ?? '(password set earlier)'}`);
+    for (const a of accounts)
+      lines.push(`  ${a.role.padEnd(10)} ${a.email.padEnd(28)} ${a.password ?? '(password set earlier)'}`);
     lines.push('');
   }
   lines.push('Press Ctrl-C to stop (PostgreSQL stops too; your data stays in .data).', '');

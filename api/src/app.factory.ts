@@ -13,7 +13,7 @@ import { AppModule } from './app.module.js';
 import { ErrorFilter } from './common/error.filter.js';
 import { createValidationPipe } from './common/validation.js';
 import type { AppConfig } from './config.js';
-import { openDatabase } from './db/database.js';
+import { openDatabase, type DatabaseHandle } from './db/database.js';
 import { NestPinoLogger, createLogger } from './logger.js';
 
 const FOURTEEN_DAYS_MS = 14 * 24 * 60 * 60 * 1000;
@@ -23,29 +23,54 @@ export interface CreatedApp {
   logger: Logger;
 }
 
-/** Builds the whole HTTP application without listening: main.ts listens, tests use inject(). */
-export async function createApp(config: AppConfig, logger: Logger = createLogger(config.logLevel)): Promise<CreatedApp> {
-  const database = openDatabase(config.databaseUrl);
-  const adapter = new FastifyAdapter({
+export function createAdapter(logger: Logger): FastifyAdapter {
+  return new FastifyAdapter({
     loggerInstance: logger,
     // Honour a caller's request id (a proxy, a test) or make one, so log lines can be followed.
     requestIdHeader: 'x-request-id',
     genReqId: () => randomUUID(),
     bodyLimit: 1024 * 1024,
   });
-  const app = await NestFactory.create<NestFastifyApplication>(AppModule.forRoot(config, database), adapter, {
-    logger: new NestPinoLogger(logger),
-    // Fastify's own JSON parser is all we accept; without Nest's extra parsers any other
-    // content type is answered with 415.
-    bodyParser: false,
-  });
+}
+
+export const APP_OPTIONS = {
+  // Fastify's own JSON parser is all we accept; without Nest's extra parsers any other content
+  // type is answered with 415.
+  bodyParser: false,
+} as const;
+
+/** Builds the whole HTTP application without listening: main.ts listens, tests use inject(). */
+export async function createApp(
+  config: AppConfig,
+  logger: Logger = createLogger(config.logLevel),
+): Promise<CreatedApp> {
+  const database = openDatabase(config.databaseUrl);
+  const app = await NestFactory.create<NestFastifyApplication>(
+    AppModule.forRoot(config, database),
+    createAdapter(logger),
+    {
+      ...APP_OPTIONS,
+      logger: new NestPinoLogger(logger),
+    },
+  );
+  await configureApp(app, config, database, logger);
+  return { app, logger };
+}
+
+/** Everything around the Nest module: plugins, sessions, pipes, filters, docs, static files. */
+export async function configureApp(
+  app: NestFastifyApplication,
+  config: AppConfig,
+  database: DatabaseHandle,
+  logger: Logger,
+): Promise<void> {
   const fastify = app.getHttpAdapter().getInstance();
   fastify.removeContentTypeParser('text/plain');
   fastify.addHook('onSend', async (request, reply) => {
     reply.header('x-request-id', request.id);
   });
 
-  await app.register(helmet as never, {
+  await app.register(helmet, {
     contentSecurityPolicy: {
       directives: {
         defaultSrc: ["'self'"],
@@ -101,5 +126,4 @@ export async function createApp(config: AppConfig, logger: Logger = createLogger
     await database.db.destroy();
   });
   await app.init();
-  return { app, logger };
 }

@@ -15,7 +15,14 @@ export class AppModule {
   static forRoot(config: AppConfig, database: DatabaseHandle): DynamicModule {
     return {
       module: AppModule,
-      imports: [ConfigModule.forRoot(config), DatabaseModule.forRoot(database), AccountModule, AuthModule, AdminModule, HealthModule],
+      imports: [
+        ConfigModule.forRoot(config),
+        DatabaseModule.forRoot(database),
+        AccountModule,
+        AuthModule,
+        AdminModule,
+        HealthModule,
+      ],
       providers: [{ provide: APP_GUARD, useClass: SessionGuard }],
     };
   }

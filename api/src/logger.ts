@@ -8,7 +8,14 @@ export function createLogger(level: string): Logger {
     // Belt and braces: request logging never includes bodies, but if anyone logs an object with
     // these keys they are blanked rather than written to disk.
     redact: {
-      paths: ['password', '*.password', 'currentPassword', 'newPassword', 'req.headers.cookie', 'res.headers["set-cookie"]'],
+      paths: [
+        'password',
+        '*.password',
+        'currentPassword',
+        'newPassword',
+        'req.headers.cookie',
+        'res.headers["set-cookie"]',
+      ],
       censor: '[redacted]',
     },
   });

@@ -103,7 +103,17 @@ export class LocalCluster {
     try {
       asServerUser(
         join(this.bin, 'initdb'),
-        ['-D', this.dir, '-U', SUPERUSER, `--pwfile=${pwFile}`, '--auth=scram-sha-256', '-E', 'UTF8', '--locale=C.UTF-8'],
+        [
+          '-D',
+          this.dir,
+          '-U',
+          SUPERUSER,
+          `--pwfile=${pwFile}`,
+          '--auth=scram-sha-256',
+          '-E',
+          'UTF8',
+          '--locale=C.UTF-8',
+        ],
         { stdio: ['ignore', 'ignore', 'inherit'] },
       );
     } finally {
@@ -135,7 +145,18 @@ export class LocalCluster {
     ];
     asServerUser(
       join(this.bin, 'pg_ctl'),
-      ['-D', this.dir, '-l', join(this.dir, 'server.log'), '-w', '-t', '60', '-o', settings.map((s) => `-c ${s}`).join(' '), 'start'],
+      [
+        '-D',
+        this.dir,
+        '-l',
+        join(this.dir, 'server.log'),
+        '-w',
+        '-t',
+        '60',
+        '-o',
+        settings.map((s) => `-c ${s}`).join(' '),
+        'start',
+      ],
       { stdio: ['ignore', 'ignore', 'inherit'] },
     );
     this.started = true;
@@ -156,7 +177,20 @@ export class LocalCluster {
   psql(sqlText, database = 'postgres') {
     return capture(
       join(this.bin, 'psql'),
-      ['-h', '127.0.0.1', '-p', String(this.port), '-U', SUPERUSER, '-d', database, '-v', 'ON_ERROR_STOP=1', '-tAc', sqlText],
+      [
+        '-h',
+        '127.0.0.1',
+        '-p',
+        String(this.port),
+        '-U',
+        SUPERUSER,
+        '-d',
+        database,
+        '-v',
+        'ON_ERROR_STOP=1',
+        '-tAc',
+        sqlText,
+      ],
       { env: { ...process.env, PGPASSWORD: this.password } },
     );
   }

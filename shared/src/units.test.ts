@@ -1,10 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import {
-  celsiusDeltaToFahrenheit,
-  celsiusToFahrenheit,
-  fahrenheitToCelsius,
-  formatTemperature,
-} from './units.js';
+import { celsiusDeltaToFahrenheit, celsiusToFahrenheit, fahrenheitToCelsius, formatTemperature } from './units.js';
 
 // NIST SP 811 (2008), appendix B.9: t/°F = 1.8 · t/°C + 32, exact. Fixed points of the scale:
 // water freezes at 0 °C = 32 °F and boils at 100 °C = 212 °F; −40 is the same on both.

@@ -30,7 +30,11 @@ export class AccountController {
   @Post('password')
   @HttpCode(204)
   @ApiNoContentResponse({ description: 'Changed; other devices are signed out' })
-  async changePassword(@CurrentAccount() account: AccountRecord, @Body() body: ChangePasswordDto, @Req() req: FastifyRequest): Promise<void> {
+  async changePassword(
+    @CurrentAccount() account: AccountRecord,
+    @Body() body: ChangePasswordDto,
+    @Req() req: FastifyRequest,
+  ): Promise<void> {
     await this.service.changePassword(account, body, req.session.sessionId);
   }
 }

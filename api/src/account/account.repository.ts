@@ -57,14 +57,27 @@ export class AccountRepository {
 
   async list(limit: number, offset: number): Promise<{ items: AccountRecord[]; total: number }> {
     const [items, count] = await Promise.all([
-      this.db.selectFrom('account').selectAll().orderBy('createdAt').orderBy('id').limit(limit).offset(offset).execute(),
-      this.db.selectFrom('account').select((eb) => eb.fn.countAll<string>().as('n')).executeTakeFirstOrThrow(),
+      this.db
+        .selectFrom('account')
+        .selectAll()
+        .orderBy('createdAt')
+        .orderBy('id')
+        .limit(limit)
+        .offset(offset)
+        .execute(),
+      this.db
+        .selectFrom('account')
+        .select((eb) => eb.fn.countAll<string>().as('n'))
+        .executeTakeFirstOrThrow(),
     ]);
     return { items, total: Number(count.n) };
   }
 
   async count(): Promise<number> {
-    const row = await this.db.selectFrom('account').select((eb) => eb.fn.countAll<string>().as('n')).executeTakeFirstOrThrow();
+    const row = await this.db
+      .selectFrom('account')
+      .select((eb) => eb.fn.countAll<string>().as('n'))
+      .executeTakeFirstOrThrow();
     return Number(row.n);
   }
 

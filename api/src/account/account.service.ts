@@ -1,5 +1,12 @@
 import { ConflictException, Injectable, NotFoundException } from '@nestjs/common';
-import type { Account, AccountListResponse, ChangePasswordRequest, Role, SignUpRequest, UpdateAccountRequest } from '@peakwise/shared';
+import type {
+  Account,
+  AccountListResponse,
+  ChangePasswordRequest,
+  Role,
+  SignUpRequest,
+  UpdateAccountRequest,
+} from '@peakwise/shared';
 import { PasswordService } from '../auth/password.service.js';
 import { passwordProblem } from '../auth/password-policy.js';
 import { fieldError } from '../common/validation.js';
@@ -17,7 +24,12 @@ export class AccountService {
     const problem = passwordProblem(request.password, [request.email, request.displayName]);
     if (problem) throw fieldError('password', problem);
     const passwordHash = await this.passwords.hash(request.password);
-    const created = await this.accounts.insert({ email: request.email, displayName: request.displayName, passwordHash, role });
+    const created = await this.accounts.insert({
+      email: request.email,
+      displayName: request.displayName,
+      passwordHash,
+      role,
+    });
     if (!created) {
       throw new ConflictException({
         message: 'An account with this e-mail already exists. Sign in instead?',

@@ -8,8 +8,6 @@ import { fieldError } from '../common/validation.js';
 import { ListAccountsQuery } from './dto/list-accounts.query.js';
 import { UpdateRoleDto } from './dto/update-role.dto.js';
 
-const accountId = new ParseUUIDPipe({ exceptionFactory: () => fieldError('id', 'Not an account id.') });
-
 /** Account management for admins. Deliberately nothing here reads a baker's logs. */
 @ApiTags('admin')
 @Roles('admin')
@@ -25,7 +23,10 @@ export class AdminController {
 
   @Patch(':id/role')
   @ApiOkResponse({ type: AccountView })
-  setRole(@Param('id', accountId) id: string, @Body() body: UpdateRoleDto): Promise<Account> {
+  setRole(
+    @Param('id', new ParseUUIDPipe({ exceptionFactory: () => fieldError('id', 'Not an account id.') })) id: string,
+    @Body() body: UpdateRoleDto,
+  ): Promise<Account> {
     return this.accounts.setRole(id, body.role);
   }
 }

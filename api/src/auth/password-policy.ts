@@ -3,7 +3,7 @@ import { PASSWORD_MAX_LENGTH, PASSWORD_MIN_LENGTH } from '@peakwise/shared';
 
 // zxcvbn-ts's list of ~49,000 passwords most often seen in breaches. OWASP ASVS 5.0 6.2.4 asks
 // that new passwords be checked against at least the top 3,000.
-const COMMON = new Set((dictionary['passwords-common'] as string[]).map((p) => p.toLowerCase()));
+const COMMON = new Set(dictionary['passwords-common'].map((p) => p.toLowerCase()));
 
 /**
  * Why a new password is refused, or null when it is acceptable. Length only, no composition

@@ -8,7 +8,9 @@ const P = 1;
 
 function scryptAsync(password: string, salt: Buffer, options: ScryptOptions): Promise<Buffer> {
   return new Promise((resolve, reject) => {
-    scrypt(password.normalize('NFKC'), salt, KEY_LENGTH, options, (error, key) => (error ? reject(error) : resolve(key)));
+    scrypt(password.normalize('NFKC'), salt, KEY_LENGTH, options, (error, key) =>
+      error ? reject(error) : resolve(key),
+    );
   });
 }
 

@@ -2,7 +2,8 @@ import { Transform } from 'class-transformer';
 import { registerDecorator, type ValidationOptions } from 'class-validator';
 
 /** Trims surrounding white space from a string field before it is validated. */
-export const Trim = () => Transform(({ value }: { value: unknown }) => (typeof value === 'string' ? value.trim() : value));
+export const Trim = () =>
+  Transform(({ value }: { value: unknown }) => (typeof value === 'string' ? value.trim() : value));
 
 /** E-mail addresses compare case-blind: keep one spelling. */
 export const NormaliseEmail = () =>

@@ -5,7 +5,9 @@ import type { FieldError } from '@peakwise/shared';
 export function toFieldErrors(errors: ValidationError[], parent = ''): FieldError[] {
   return errors.flatMap((error) => {
     const field = parent ? `${parent}.${error.property}` : error.property;
-    const own = Object.values(error.constraints ?? {}).slice(0, 1).map((message) => ({ field, message }));
+    const own = Object.values(error.constraints ?? {})
+      .slice(0, 1)
+      .map((message) => ({ field, message }));
     return [...own, ...toFieldErrors(error.children ?? [], field)];
   });
 }

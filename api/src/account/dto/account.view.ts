@@ -1,5 +1,14 @@
 import { ApiProperty } from '@nestjs/swagger';
-import { ROLES, TEMPERATURE_UNITS, UNIT_SYSTEMS, type Account, type AccountListResponse, type Role, type TemperatureUnit, type UnitSystem } from '@peakwise/shared';
+import {
+  ROLES,
+  TEMPERATURE_UNITS,
+  UNIT_SYSTEMS,
+  type Account,
+  type AccountListResponse,
+  type Role,
+  type TemperatureUnit,
+  type UnitSystem,
+} from '@peakwise/shared';
 
 /** Documents the Account shape in the OpenAPI reference; the type itself lives in shared/. */
 export class AccountView implements Account {
