@@ -5,7 +5,7 @@ import helmet from '@fastify/helmet';
 import fastifySession from '@fastify/session';
 import { NestFactory } from '@nestjs/core';
 import { FastifyAdapter, type NestFastifyApplication } from '@nestjs/platform-fastify';
-import { DocumentBuilder, SwaggerModule } from '@nestjs/swagger';
+import { DocumentBuilder, SwaggerModule, type OpenAPIObject } from '@nestjs/swagger';
 import connectPgSimple from 'connect-pg-simple';
 import expressSession from 'express-session';
 import type { Logger } from 'pino';
@@ -31,6 +31,21 @@ export function createAdapter(logger: Logger): FastifyAdapter {
     genReqId: () => randomUUID(),
     bodyLimit: 1024 * 1024,
   });
+}
+
+/** The OpenAPI document; also committed as api/openapi.json, which a test keeps current. */
+export function buildOpenApiDocument(app: NestFastifyApplication): OpenAPIObject {
+  return SwaggerModule.createDocument(
+    app,
+    new DocumentBuilder()
+      .setTitle('Peakwise API')
+      .setDescription(
+        'Sourdough culture logbook. Errors: { statusCode, error, message, details?: [{ field, message }] }.',
+      )
+      .setVersion('0.1.0')
+      .addCookieAuth('peakwise.sid')
+      .build(),
+  );
 }
 
 export const APP_OPTIONS = {
@@ -106,15 +121,7 @@ export async function configureApp(
   app.useGlobalPipes(createValidationPipe());
   app.useGlobalFilters(new ErrorFilter(logger, config.webDist));
 
-  const document = SwaggerModule.createDocument(
-    app,
-    new DocumentBuilder()
-      .setTitle('Peakwise API')
-      .setDescription('Sourdough culture logbook: accounts now; cultures, feedings and predictions to come.')
-      .setVersion('0.1.0')
-      .addCookieAuth('peakwise.sid')
-      .build(),
-  );
+  const document = buildOpenApiDocument(app);
   SwaggerModule.setup('api/docs', app, document, { jsonDocumentUrl: 'api/docs/openapi.json' });
 
   if (config.webDist) {

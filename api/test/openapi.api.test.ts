@@ -1,0 +1,43 @@
+import { existsSync, readFileSync, writeFileSync } from 'node:fs';
+import { fileURLToPath } from 'node:url';
+import { afterAll, beforeAll, expect, it } from 'vitest';
+import { createTestApp, type TestApp } from './test-app.js';
+
+// The OpenAPI document is committed (api/openapi.json) so API changes show up in review.
+// Regenerate with: UPDATE_OPENAPI=1 npm test -- api
+const committed = fileURLToPath(new URL('../openapi.json', import.meta.url));
+
+let t: TestApp;
+beforeAll(async () => {
+  t = await createTestApp();
+});
+afterAll(() => t.close());
+
+it('serves the OpenAPI document that is committed in api/openapi.json', async () => {
+  const res = await t.app.inject({ method: 'GET', url: '/api/docs/openapi.json' });
+  expect(res.statusCode).toBe(200);
+  const served = JSON.stringify(res.json(), null, 2) + '\n';
+  if (process.env.UPDATE_OPENAPI === '1') writeFileSync(committed, served);
+  expect(existsSync(committed), 'api/openapi.json is missing').toBe(true);
+  expect(served, 'api/openapi.json is stale: run UPDATE_OPENAPI=1 npm test -- api').toBe(
+    readFileSync(committed, 'utf8'),
+  );
+});
+
+it('documents every route under /api', async () => {
+  const doc = (await t.app.inject({ method: 'GET', url: '/api/docs/openapi.json' })).json<{
+    paths: Record<string, unknown>;
+  }>();
+  expect(Object.keys(doc.paths).sort()).toEqual(
+    [
+      '/api/account',
+      '/api/account/password',
+      '/api/admin/accounts',
+      '/api/admin/accounts/{id}/role',
+      '/api/auth/sign-in',
+      '/api/auth/sign-out',
+      '/api/auth/sign-up',
+      '/api/health',
+    ].sort(),
+  );
+});
