@@ -1,5 +1,6 @@
 import { randomBytes } from 'node:crypto';
 import type { NestFastifyApplication } from '@nestjs/platform-fastify';
+import type { FastifyInstance } from 'fastify';
 import { Test } from '@nestjs/testing';
 import { sql } from 'kysely';
 import { pino } from 'pino';
@@ -33,8 +34,16 @@ export function testConfig(overrides: Partial<AppConfig> = {}): AppConfig {
   };
 }
 
+export interface TestAppOptions {
+  /** Runs on the bare Fastify instance before any plugin is registered (e.g. to add an early hook). */
+  beforeConfigure?: (fastify: FastifyInstance) => void;
+}
+
 /** The real application module on the real test database, built through @nestjs/testing. */
-export async function createTestApp(overrides: Partial<AppConfig> = {}): Promise<TestApp> {
+export async function createTestApp(
+  overrides: Partial<AppConfig> = {},
+  options: TestAppOptions = {},
+): Promise<TestApp> {
   const config = testConfig(overrides);
   const database = openDatabase(config.databaseUrl, 4);
   const logger = pino({ level: config.logLevel });
@@ -43,6 +52,7 @@ export async function createTestApp(overrides: Partial<AppConfig> = {}): Promise
     ...APP_OPTIONS,
     logger: false,
   });
+  options.beforeConfigure?.(app.getHttpAdapter().getInstance());
   await configureApp(app, config, database, logger);
   await app.getHttpAdapter().getInstance().ready();
   return { app, db: database.db, config, close: () => app.close() };
@@ -53,9 +63,17 @@ export async function resetDatabase(db: Database): Promise<void> {
   await sql`TRUNCATE account, session`.execute(db);
 }
 
-/** The `name=value` part of a Set-Cookie header, ready to send back as a Cookie header. */
+/** Every Set-Cookie header of a response that sets (not clears) the session cookie. */
+export function liveSessionCookies(setCookie: string | string[] | undefined): string[] {
+  const headers = setCookie === undefined ? [] : Array.isArray(setCookie) ? setCookie : [setCookie];
+  // A sign-in over an old session answers with two headers: one clearing the old cookie
+  // (`peakwise.sid=; Max-Age=0`) and one setting the new; the browser keeps the last.
+  return headers.filter((c) => c.startsWith('peakwise.sid=') && !c.startsWith('peakwise.sid=;'));
+}
+
+/** The `name=value` part of the session's Set-Cookie header, ready to send back as a Cookie header. */
 export function sessionCookie(setCookie: string | string[] | undefined): string {
-  const header = Array.isArray(setCookie) ? setCookie.find((c) => c.startsWith('peakwise.sid=')) : setCookie;
-  if (!header?.startsWith('peakwise.sid=')) throw new Error(`no session cookie in ${JSON.stringify(setCookie)}`);
+  const header = liveSessionCookies(setCookie).at(-1);
+  if (!header) throw new Error(`no session cookie in ${JSON.stringify(setCookie)}`);
   return header.split(';')[0]!;
 }

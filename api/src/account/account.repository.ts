@@ -81,13 +81,29 @@ export class AccountRepository {
     return Number(row.n);
   }
 
-  async countByRole(role: Role): Promise<number> {
-    const row = await this.db
-      .selectFrom('account')
-      .select((eb) => eb.fn.countAll<string>().as('n'))
-      .where('role', '=', role)
-      .executeTakeFirstOrThrow();
-    return Number(row.n);
+  /**
+   * Changes a role unless that would leave no admin. The admin rows are locked first so two
+   * admins demoting each other at the same moment cannot both succeed.
+   */
+  setRoleKeepingAnAdmin(id: string, role: Role): Promise<AccountRecord | 'not-found' | 'last-admin'> {
+    return this.db.transaction().execute(async (trx) => {
+      const admins = await trx
+        .selectFrom('account')
+        .select('id')
+        .where('role', '=', 'admin')
+        .orderBy('id')
+        .forUpdate()
+        .execute();
+      const target = await trx.selectFrom('account').selectAll().where('id', '=', id).forUpdate().executeTakeFirst();
+      if (!target) return 'not-found';
+      if (target.role === 'admin' && role !== 'admin' && admins.length <= 1) return 'last-admin';
+      return trx
+        .updateTable('account')
+        .set({ role, updatedAt: new Date() })
+        .where('id', '=', id)
+        .returningAll()
+        .executeTakeFirstOrThrow();
+    });
   }
 
   /** Ends every session of an account except, optionally, the one making the request. */

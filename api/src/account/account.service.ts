@@ -69,17 +69,15 @@ export class AccountService {
   }
 
   async setRole(id: string, role: Role): Promise<Account> {
-    const target = await this.accounts.findById(id);
-    if (!target) throw new NotFoundException('No account with this id.');
-    if (target.role === 'admin' && role !== 'admin' && (await this.accounts.countByRole('admin')) <= 1) {
+    const result = await this.accounts.setRoleKeepingAnAdmin(id, role);
+    if (result === 'not-found') throw new NotFoundException('No account with this id.');
+    if (result === 'last-admin') {
       // Otherwise nobody could ever manage roles again short of editing the database.
       throw new ConflictException({
         message: 'This is the last admin account; make someone else admin first.',
         details: [{ field: 'role', message: 'At least one admin must remain.' }],
       });
     }
-    const updated = await this.accounts.update(id, { role });
-    if (!updated) throw new NotFoundException('No account with this id.');
-    return toAccount(updated);
+    return toAccount(result);
   }
 }

@@ -1,4 +1,4 @@
-import { Body, Controller, HttpCode, Post, Req, UseGuards } from '@nestjs/common';
+import { Body, Controller, HttpCode, Post, Req, Res, UseGuards } from '@nestjs/common';
 import {
   ApiBody,
   ApiCreatedResponse,
@@ -8,7 +8,7 @@ import {
   ApiUnauthorizedResponse,
 } from '@nestjs/swagger';
 import type { Account } from '@peakwise/shared';
-import type { FastifyRequest } from 'fastify';
+import type { FastifyReply, FastifyRequest } from 'fastify';
 import { toAccount } from '../account/account.mapper.js';
 import type { AccountRecord } from '../account/account.repository.js';
 import { AccountService } from '../account/account.service.js';
@@ -56,7 +56,8 @@ export class AuthController {
   @Post('sign-out')
   @HttpCode(204)
   @ApiNoContentResponse()
-  async signOut(@Req() req: FastifyRequest): Promise<void> {
+  async signOut(@Req() req: FastifyRequest, @Res({ passthrough: true }) reply: FastifyReply): Promise<void> {
     if (req.session.get('accountId')) await req.session.destroy();
+    void reply.clearCookie('peakwise.sid', { path: '/' });
   }
 }

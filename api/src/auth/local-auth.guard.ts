@@ -14,7 +14,10 @@ import { SignInDto } from './dto/sign-in.dto.js';
 export class LocalAuthGuard extends AuthGuard('local') {
   override async canActivate(context: ExecutionContext): Promise<boolean> {
     const request = context.switchToHttp().getRequest<{ body: unknown }>();
-    const body = plainToInstance(SignInDto, request.body ?? {});
+    const raw = request.body;
+    // An array or a bare string would reach class-validator as "an unknown value" with no field.
+    const plain = typeof raw === 'object' && raw !== null && !Array.isArray(raw) ? raw : {};
+    const body = plainToInstance(SignInDto, plain);
     const errors = await validate(body, { whitelist: true, forbidNonWhitelisted: true });
     if (errors.length) {
       throw new BadRequestException({ message: 'Some fields need another look.', details: toFieldErrors(errors) });

@@ -1,5 +1,11 @@
 import { Transform } from 'class-transformer';
-import { registerDecorator, type ValidationOptions } from 'class-validator';
+import { ValidateIf, registerDecorator, type ValidationOptions } from 'class-validator';
+
+/**
+ * The field may be left out, but if it is sent it must be valid. Unlike class-validator's
+ * @IsOptional(), `null` is not "left out": it is validated (and refused) like any other value.
+ */
+export const Omittable = () => ValidateIf((_: object, value: unknown) => value !== undefined);
 
 /** Trims surrounding white space from a string field before it is validated. */
 export const Trim = () =>

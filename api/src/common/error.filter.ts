@@ -25,34 +25,46 @@ interface FastifyError {
   message: string;
 }
 
+// Fastify's own wording names its internals ("content-type is set to…"); say it plainly.
 const PLAIN_MESSAGES: Record<string, string> = {
   FST_ERR_CTP_INVALID_MEDIA_TYPE: 'Send the request body as application/json.',
+  FST_ERR_CTP_INVALID_JSON_BODY: 'The request body is not valid JSON.',
   FST_ERR_CTP_EMPTY_JSON_BODY: 'The request body is empty; send a JSON object.',
   FST_ERR_CTP_BODY_TOO_LARGE: 'The request body is too large.',
 };
+
+function plainMessage(error: unknown): string | undefined {
+  const code = (error as FastifyError | undefined)?.code;
+  if (code) return PLAIN_MESSAGES[code];
+  // A custom parser may throw JSON.parse's own SyntaxError.
+  return error instanceof SyntaxError ? PLAIN_MESSAGES.FST_ERR_CTP_INVALID_JSON_BODY : undefined;
+}
+
+function reason(statusCode: number): string {
+  return STATUS_CODES[statusCode] ?? 'Error';
+}
 
 export function toErrorResponse(exception: unknown): ErrorResponse {
   if (exception instanceof HttpException) {
     const statusCode = exception.getStatus();
     const body = exception.getResponse();
     const { message, details } = (typeof body === 'object' ? body : { message: body }) as ErrorBody;
+    // Nest's Fastify adapter wraps Fastify's 4xx errors (bad JSON, wrong content type) in an
+    // HttpException and keeps the original as its cause.
+    const plain = plainMessage(exception.cause);
     return {
       statusCode,
-      error: STATUS_CODES[statusCode] ?? 'Error',
-      message: typeof message === 'string' ? message : exception.message,
+      error: reason(statusCode),
+      message: plain ?? (typeof message === 'string' ? message : exception.message),
       ...(details?.length ? { details } : {}),
     };
   }
-  const fastifyError = exception as FastifyError;
-  const status = fastifyError?.statusCode;
+  const status = (exception as FastifyError | undefined)?.statusCode;
   if (typeof status === 'number' && status >= 400 && status < 500) {
-    const invalidJson = fastifyError.code === 'FST_ERR_CTP_INVALID_JSON' || exception instanceof SyntaxError;
     return {
       statusCode: status,
-      error: STATUS_CODES[status] ?? 'Error',
-      message: invalidJson
-        ? 'The request body is not valid JSON.'
-        : (PLAIN_MESSAGES[fastifyError.code ?? ''] ?? fastifyError.message),
+      error: reason(status),
+      message: plainMessage(exception) ?? (exception as FastifyError).message,
     };
   }
   return {

@@ -1,6 +1,6 @@
 import { ApiProperty } from '@nestjs/swagger';
 import { PASSWORD_MAX_LENGTH, PASSWORD_MIN_LENGTH, type ChangePasswordRequest } from '@peakwise/shared';
-import { IsNotEmpty, IsString, Length, MaxLength } from 'class-validator';
+import { IsNotEmpty, IsString, MaxLength } from 'class-validator';
 
 export class ChangePasswordDto implements ChangePasswordRequest {
   @ApiProperty()
@@ -10,9 +10,8 @@ export class ChangePasswordDto implements ChangePasswordRequest {
   currentPassword: string;
 
   @ApiProperty({ minLength: PASSWORD_MIN_LENGTH, maxLength: PASSWORD_MAX_LENGTH })
-  @Length(PASSWORD_MIN_LENGTH, PASSWORD_MAX_LENGTH, {
-    message: `Use ${PASSWORD_MIN_LENGTH} to ${PASSWORD_MAX_LENGTH} characters.`,
-  })
+  // Length and common-password rules: password-policy.ts (see SignUpDto).
+  @MaxLength(1024, { message: `Use at most ${PASSWORD_MAX_LENGTH} characters.` })
   @IsString({ message: 'Enter a new password.' })
   newPassword: string;
 }
