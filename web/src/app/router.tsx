@@ -1,0 +1,78 @@
+import { useState } from 'react';
+import { createBrowserRouter, Navigate, RouterProvider } from 'react-router-dom';
+import { NotAllowed } from '@/components/feedback/not-allowed';
+import { PageLoader } from '@/components/feedback/page-loader';
+import { AppShell } from '@/components/layout/app-shell';
+import { RequireAuth, RequireRole, RequireSignedOut } from '@/lib/auth/route-guards';
+import { RouteError } from './routes/route-error';
+
+// Each page is its own chunk (`lazy`), so a phone on a slow line downloads only what it opens.
+// Guards and the shell are small and needed on every signed-in page, so they stay in the main chunk.
+function createAppRouter() {
+  return createBrowserRouter([
+    {
+      HydrateFallback: PageLoader,
+      ErrorBoundary: RouteError,
+      children: [
+        {
+          element: <RequireSignedOut />,
+          children: [
+            {
+              path: 'sign-in',
+              lazy: async () => ({ Component: (await import('./routes/sign-in')).SignInRoute }),
+            },
+            {
+              path: 'sign-up',
+              lazy: async () => ({ Component: (await import('./routes/sign-up')).SignUpRoute }),
+            },
+          ],
+        },
+        {
+          element: <RequireAuth />,
+          children: [
+            {
+              element: <AppShell />,
+              children: [
+                {
+                  index: true,
+                  lazy: async () => ({ Component: (await import('./routes/home')).HomeRoute }),
+                },
+                {
+                  path: 'account',
+                  lazy: async () => ({
+                    Component: (await import('./routes/account')).AccountRoute,
+                  }),
+                },
+                {
+                  path: 'admin',
+                  element: (
+                    <RequireRole role="admin" fallback={<NotAllowed what="This page is for Peakwise admins." />} />
+                  ),
+                  children: [
+                    { index: true, element: <Navigate to="accounts" replace /> },
+                    {
+                      path: 'accounts',
+                      lazy: async () => ({
+                        Component: (await import('./routes/admin/accounts')).AdminAccountsRoute,
+                      }),
+                    },
+                  ],
+                },
+              ],
+            },
+          ],
+        },
+        {
+          path: '*',
+          lazy: async () => ({ Component: (await import('./routes/not-found')).NotFoundRoute }),
+        },
+      ],
+    },
+  ]);
+}
+
+export function AppRouter() {
+  // Created once per mount (not at import time), so importing this module has no side effects.
+  const [router] = useState(createAppRouter);
+  return <RouterProvider router={router} />;
+}

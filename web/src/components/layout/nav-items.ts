@@ -1,0 +1,28 @@
+import AdminPanelSettingsOutlined from '@mui/icons-material/AdminPanelSettingsOutlined';
+import HomeOutlined from '@mui/icons-material/HomeOutlined';
+import PersonOutlined from '@mui/icons-material/PersonOutlined';
+import type SvgIcon from '@mui/material/SvgIcon';
+import type { NavTarget } from './nav-match';
+
+export interface NavItem extends NavTarget {
+  label: string;
+  icon: typeof SvgIcon;
+}
+
+/**
+ * The one list both the phone bottom bar and the wide-screen side rail are drawn from, in order.
+ * A new area (Shelf, Bench, Formula, Classroom, Alerts) gets an entry here when its page exists.
+ * A phone bar holds five entries comfortably; past that, move the least-used ones (Account, Admin)
+ * into the top bar's menu rather than shrinking the labels.
+ */
+export const NAV_ITEMS: readonly NavItem[] = [
+  { label: 'Home', to: '/', icon: HomeOutlined },
+  { label: 'Account', to: '/account', icon: PersonOutlined },
+  {
+    label: 'Admin',
+    to: '/admin/accounts',
+    section: '/admin',
+    icon: AdminPanelSettingsOutlined,
+    roles: ['admin'],
+  },
+];
