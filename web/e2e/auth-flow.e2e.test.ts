@@ -1,6 +1,6 @@
 import { join } from 'node:path';
-import type { Page } from 'playwright-core';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { request, type Page } from 'playwright-core';
+import { afterEach, beforeEach, describe, expect, it } from 'vitest';
 import { baseUrl, DESKTOP, launchBrowser, PHONE, RESULTS_DIR, uniqueEmail, type Browser } from './browser';
 
 const PASSWORD = 'rye starter bubbles at dawn';
@@ -26,12 +26,14 @@ describe('signing up, out and in', () => {
   let base: string;
   let browser: Browser;
 
-  beforeAll(async () => {
+  // A fresh browser (and so a fresh cookie jar) per test: clearing cookies in a shared one races
+  // with a late response of the previous test setting the rolling session cookie again.
+  beforeEach(async () => {
     base = baseUrl();
     browser = await launchBrowser(PHONE);
   });
 
-  afterAll(async () => {
+  afterEach(async () => {
     await browser?.close();
   });
 
@@ -96,17 +98,23 @@ describe('signing up, out and in', () => {
   });
 
   it('shows a taken e-mail at the e-mail field', async () => {
-    await browser.context.clearCookies();
-    const page = await browser.context.newPage();
+    // Someone already holds this e-mail: made through the API in a separate cookie jar, so this
+    // browser stays signed out.
     const email = uniqueEmail('dev');
-    await signUp(page, base, 'Dev Rowan', email);
-    await browser.context.clearCookies();
+    const api = await request.newContext({ baseURL: base });
+    const created = await api.post('/api/auth/sign-up', {
+      data: { displayName: 'Dev Rowan', email, password: PASSWORD },
+    });
+    expect(created.status()).toBe(201);
+    await api.dispose();
 
+    const page = await browser.context.newPage();
     await page.goto(`${base}/sign-up`);
     await page.getByLabel('Your name').fill('Dev Rowan again');
     await page.getByLabel('E-mail').fill(email);
     await page.getByLabel('Password', { exact: true }).fill(PASSWORD);
     await page.getByRole('button', { name: 'Create account' }).click();
+    await page.getByText('This e-mail is already registered.').waitFor();
     const emailInput = page.getByLabel('E-mail');
     await page.waitForFunction(
       () => document.querySelector('input[name="email"]')?.getAttribute('aria-invalid') === 'true',
@@ -117,7 +125,6 @@ describe('signing up, out and in', () => {
   });
 
   it('shows the side rail instead of the bottom navigation on a wide screen', async () => {
-    await browser.context.clearCookies();
     const page = await browser.context.newPage();
     await page.setViewportSize(DESKTOP);
     const name = 'Ines Marlow';
