@@ -166,4 +166,20 @@ describe('POST /api/auth/sign-up', () => {
     expectFieldErrors(await postSignUp(valid({ displayName: '   ' })), ['displayName']);
     expectFieldErrors(await postSignUp(valid({ displayName: 'x'.repeat(81) })), ['displayName']);
   });
+
+  it('starts the account in the time zone the device sent, or UTC when none was sent', async () => {
+    const zoned = await postSignUp(valid({ timeZone: 'America/Chicago' }));
+    expect(zoned.statusCode).toBe(201);
+    expect(zoned.json<Account>().timeZone).toBe('America/Chicago');
+    const plain = await postSignUp(valid());
+    expect(plain.json<Account>().timeZone).toBe('UTC');
+  });
+
+  it('refuses an unknown or null time zone with 400 naming timeZone, writing nothing', async () => {
+    for (const timeZone of ['Mars/Olympus_Mons', null, 42]) {
+      const email = uniqueEmail();
+      expectFieldErrors(await postSignUp(valid({ email, timeZone })), ['timeZone']);
+      expect(await accountRows(email)).toHaveLength(0);
+    }
+  });
 });

@@ -12,6 +12,7 @@ export interface NewAccount {
   displayName: string;
   passwordHash: string;
   role?: Role;
+  timeZone?: string;
 }
 
 export interface AccountChanges {

@@ -27,6 +27,7 @@ export class AccountService {
     const created = await this.accounts.insert({
       email: request.email,
       displayName: request.displayName,
+      timeZone: request.timeZone,
       passwordHash,
       role,
     });

@@ -37,8 +37,7 @@ try {
     const made = [];
     for (const person of PEOPLE) {
       const password = shared ?? `loaf-${randomBytes(9).toString('base64url')}`;
-      const account = await service.signUp({ ...person, password }, person.role);
-      await repository.update(account.id, { timeZone: 'Europe/London' });
+      await service.signUp({ ...person, password, timeZone: 'Europe/London' }, person.role);
       made.push({ ...person, password });
     }
     const dataDir = process.env.PEAKWISE_DATA_DIR;

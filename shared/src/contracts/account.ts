@@ -20,6 +20,8 @@ export interface SignUpRequest {
   email: string;
   displayName: string;
   password: string;
+  /** The device's IANA time zone, so forecasts start out in local time; `UTC` when left out. */
+  timeZone?: string;
 }
 
 export interface SignInRequest {

@@ -1,4 +1,4 @@
-import { ApiProperty } from '@nestjs/swagger';
+import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
 import {
   DISPLAY_NAME_MAX_LENGTH,
   EMAIL_MAX_LENGTH,
@@ -7,7 +7,7 @@ import {
   type SignUpRequest,
 } from '@peakwise/shared';
 import { IsEmail, IsString, Length, MaxLength } from 'class-validator';
-import { NormaliseEmail, Trim } from '../../common/dto-helpers.js';
+import { IsTimeZone, NormaliseEmail, Omittable, Trim } from '../../common/dto-helpers.js';
 
 export class SignUpDto implements SignUpRequest {
   @ApiProperty({ example: 'theo@example.com' })
@@ -28,4 +28,9 @@ export class SignUpDto implements SignUpRequest {
   @MaxLength(1024, { message: `Use at most ${PASSWORD_MAX_LENGTH} characters.` })
   @IsString({ message: 'Enter a password.' })
   password: string;
+
+  @ApiPropertyOptional({ example: 'Europe/London' })
+  @Omittable()
+  @IsTimeZone()
+  timeZone?: string;
 }

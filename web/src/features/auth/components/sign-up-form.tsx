@@ -24,6 +24,8 @@ export function SignUpForm() {
         displayName: values.displayName.trim(),
         email: values.email.trim(),
         password: values.password,
+        // Start the account in the kitchen's own time; the Account page can change it.
+        timeZone: Intl.DateTimeFormat().resolvedOptions().timeZone,
       });
     } catch (error) {
       applyServerErrors(error, setError, FIELDS);
