@@ -52,6 +52,7 @@ function stopAll(code) {
   stopping = true;
   const finish = () => {
     cluster?.stop();
+    log(code === 0 ? 'stopped' : `stopped (exit ${code})`);
     process.exit(code);
   };
   if (api && api.exitCode === null) {
@@ -117,7 +118,7 @@ function printBanner(url) {
   if (accounts.length) {
     lines.push('Demo sign-ins (the Larkspur Community Kitchen class):');
     for (const a of accounts)
-      lines.push(`  ${a.role.padEnd(10)} ${a.email.padEnd(28)} ${a.password ?? '(password set earlier)'}`);
+      lines.push(`  ${a.role.padEnd(10)} ${a.email.padEnd(34)} ${a.password ?? '(password set earlier)'}`);
     lines.push('');
   }
   lines.push('Press Ctrl-C to stop (PostgreSQL stops too; your data stays in .data).', '');

@@ -22,7 +22,8 @@ function pgIds() {
 /** Runs a server binary as the user PostgreSQL accepts. */
 function asServerUser(bin, args, options = {}) {
   if (!isRoot) return run(bin, args, options);
-  return run('runuser', ['-u', 'postgres', '--', bin, ...args], options);
+  // From / : the postgres user may not be allowed into the folder we were started from.
+  return run('runuser', ['-u', 'postgres', '--', bin, ...args], { cwd: '/', ...options });
 }
 
 /**
@@ -34,7 +35,7 @@ export function clusterParent(root) {
   const local = join(root, '.data');
   if (!isRoot) return local;
   mkdirSync(local, { recursive: true });
-  if (capture('runuser', ['-u', 'postgres', '--', 'test', '-x', local]) !== null) return local;
+  if (capture('runuser', ['-u', 'postgres', '--', 'test', '-x', local], { cwd: '/' }) !== null) return local;
   const key = createHash('sha256').update(root).digest('hex').slice(0, 12);
   const fallback = join('/var/lib/peakwise', key);
   mkdirSync(fallback, { recursive: true });
@@ -124,7 +125,9 @@ export class LocalCluster {
   isRunning() {
     const args = ['status', '-D', this.dir];
     const cmd = isRoot ? 'runuser' : join(this.bin, 'pg_ctl');
-    return capture(cmd, isRoot ? ['-u', 'postgres', '--', join(this.bin, 'pg_ctl'), ...args] : args) !== null;
+    return (
+      capture(cmd, isRoot ? ['-u', 'postgres', '--', join(this.bin, 'pg_ctl'), ...args] : args, { cwd: '/' }) !== null
+    );
   }
 
   async start() {
