@@ -121,6 +121,6 @@ function printBanner(url) {
       lines.push(`  ${a.role.padEnd(10)} ${a.email.padEnd(34)} ${a.password ?? '(password set earlier)'}`);
     lines.push('');
   }
-  lines.push('Press Ctrl-C to stop (PostgreSQL stops too; your data stays in .data).', '');
+  lines.push('Press Ctrl-C to stop (PostgreSQL stops too; your data is kept for the next start).', '');
   process.stdout.write(lines.join('\n') + '\n');
 }
