@@ -115,6 +115,8 @@ function startServer(databaseUrl, port) {
         SESSION_SECRET: 'test-only-secret-test-only-secret-0123456789',
         WEB_DIST: webDist,
         LOG_LEVEL: 'warn',
+        // Browser tests sign in many times from one address; api/test/throttle.api.test.ts covers the brake.
+        AUTH_ATTEMPTS_PER_MINUTE: '1000',
         NODE_ENV: 'test',
       },
     });

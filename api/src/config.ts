@@ -9,6 +9,8 @@ export interface AppConfig {
   logLevel: string;
   /** log2 of scrypt's N. 17 by default (OWASP's minimum for scrypt); tests lower it for speed. */
   passwordHashCost: number;
+  /** Sign-in and sign-up attempts allowed per client address per minute (brute-force brake). */
+  authAttemptsPerMinute: number;
   /** Delete expired sessions every this many seconds; 0 turns pruning off (tests). */
   sessionPruneSeconds: number;
 }
@@ -36,6 +38,7 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): AppConfig {
     logLevel: env.LOG_LEVEL ?? 'info',
     passwordHashCost,
     sessionPruneSeconds: Number(env.SESSION_PRUNE_SECONDS ?? 900),
+    authAttemptsPerMinute: Number(env.AUTH_ATTEMPTS_PER_MINUTE ?? 10),
   };
 }
 

@@ -30,6 +30,8 @@ export function testConfig(overrides: Partial<AppConfig> = {}): AppConfig {
     // code path is the same.
     passwordHashCost: 14,
     sessionPruneSeconds: 0,
+    // Suites sign in hundreds of times from one address; throttle.api.test.ts tests the brake.
+    authAttemptsPerMinute: 100_000,
     ...overrides,
   };
 }

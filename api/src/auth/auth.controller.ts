@@ -5,6 +5,7 @@ import {
   ApiNoContentResponse,
   ApiOkResponse,
   ApiTags,
+  ApiTooManyRequestsResponse,
   ApiUnauthorizedResponse,
 } from '@nestjs/swagger';
 import type { Account } from '@peakwise/shared';
@@ -13,6 +14,7 @@ import { toAccount } from '../account/account.mapper.js';
 import type { AccountRecord } from '../account/account.repository.js';
 import { AccountService } from '../account/account.service.js';
 import { AccountView } from '../account/dto/account.view.js';
+import { ThrottlerGuard } from '@nestjs/throttler';
 import { Public } from '../common/auth.decorators.js';
 import { SignInDto } from './dto/sign-in.dto.js';
 import { SignUpDto } from './dto/sign-up.dto.js';
@@ -31,6 +33,7 @@ export class AuthController {
   constructor(private readonly accounts: AccountService) {}
 
   @Public()
+  @UseGuards(ThrottlerGuard)
   @Post('sign-up')
   @ApiCreatedResponse({ type: AccountView, description: 'Account created and signed in' })
   async signUp(@Body() body: SignUpDto, @Req() req: FastifyRequest): Promise<Account> {
@@ -40,12 +43,14 @@ export class AuthController {
   }
 
   @Public()
-  @UseGuards(LocalAuthGuard)
+  // The brake counts before the password check, so failed guesses use up the allowance too.
+  @UseGuards(ThrottlerGuard, LocalAuthGuard)
   @Post('sign-in')
   @HttpCode(200)
   @ApiBody({ type: SignInDto })
   @ApiOkResponse({ type: AccountView })
   @ApiUnauthorizedResponse({ description: 'E-mail or password is incorrect' })
+  @ApiTooManyRequestsResponse({ description: 'Too many attempts from this address in the last minute' })
   async signIn(@Req() req: FastifyRequest & { user: AccountRecord }): Promise<Account> {
     await startSession(req, req.user);
     return toAccount(req.user);

@@ -12,6 +12,7 @@ function service(passwordHashCost: number): PasswordService {
     logLevel: 'silent',
     passwordHashCost,
     sessionPruneSeconds: 0,
+    authAttemptsPerMinute: 10,
   };
   return new PasswordService(config);
 }
