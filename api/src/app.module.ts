@@ -5,10 +5,14 @@ import { AdminModule } from './admin/admin.module.js';
 import { AuthModule } from './auth/auth.module.js';
 import { SessionGuard } from './common/session.guard.js';
 import { ConfigModule } from './config.module.js';
+import { CultureModule } from './culture/culture.module.js';
 import type { AppConfig } from './config.js';
 import { DatabaseModule } from './db/database.module.js';
 import type { DatabaseHandle } from './db/database.js';
+import { FeedingModule } from './feeding/feeding.module.js';
 import { HealthModule } from './health/health.module.js';
+import { RiseCheckModule } from './rise-check/rise-check.module.js';
+import { TemperatureModule } from './temperature/temperature.module.js';
 
 @Module({})
 export class AppModule {
@@ -22,6 +26,10 @@ export class AppModule {
         AuthModule,
         AdminModule,
         HealthModule,
+        CultureModule,
+        FeedingModule,
+        RiseCheckModule,
+        TemperatureModule,
       ],
       providers: [{ provide: APP_GUARD, useClass: SessionGuard }],
     };

@@ -37,7 +37,15 @@ it('documents every route under /api', async () => {
       '/api/auth/sign-in',
       '/api/auth/sign-out',
       '/api/auth/sign-up',
+      '/api/cultures',
+      '/api/cultures/{id}',
+      '/api/cultures/{cultureId}/feedings',
+      '/api/feedings/{id}',
+      '/api/feedings/{feedingId}/rise-checks',
+      '/api/feedings/{feedingId}/temperatures',
       '/api/health',
+      '/api/rise-checks/{id}',
+      '/api/temperatures/{id}',
     ].sort(),
   );
 });

@@ -36,6 +36,60 @@ export interface Account {
   updatedAt: Generated<Timestamp>;
 }
 
+export interface Culture {
+  accountId: string;
+  archivedAt: Timestamp | null;
+  createdAt: Generated<Timestamp>;
+  defaultFlour: string | null;
+  defaultHydrationPct: number | null;
+  id: Generated<string>;
+  location: Generated<string>;
+  name: string;
+  notes: string | null;
+  parentCultureId: string | null;
+  startedOn: Timestamp | null;
+  updatedAt: Generated<Timestamp>;
+}
+
+export interface Feeding {
+  createdAt: Generated<Timestamp>;
+  cultureId: string;
+  fedAt: Timestamp;
+  flour: string | null;
+  flourG: number;
+  id: Generated<string>;
+  initialHeightMm: number | null;
+  notes: string | null;
+  observations: Generated<string[]>;
+  starterG: number;
+  temperatureC: number | null;
+  updatedAt: Generated<Timestamp>;
+  waterG: number;
+  waterTemperatureC: number | null;
+}
+
+export interface IdempotencyKey {
+  accountId: string;
+  completedAt: Timestamp | null;
+  createdAt: Generated<Timestamp>;
+  key: string;
+  method: string;
+  path: string;
+  requestHash: string;
+  responseBody: Json | null;
+  statusCode: number | null;
+}
+
+export interface RiseCheck {
+  createdAt: Generated<Timestamp>;
+  feedingId: string;
+  heightMm: number;
+  id: Generated<string>;
+  takenAt: Timestamp;
+  temperatureC: number | null;
+  updatedAt: Generated<Timestamp>;
+}
+
 export interface SchemaMigration {
   appliedAt: Generated<Timestamp>;
   checksum: string;
@@ -48,8 +102,21 @@ export interface Session {
   sid: string;
 }
 
+export interface TemperatureReading {
+  createdAt: Generated<Timestamp>;
+  feedingId: string;
+  id: Generated<string>;
+  takenAt: Timestamp;
+  temperatureC: number;
+}
+
 export interface DB {
   account: Account;
+  culture: Culture;
+  feeding: Feeding;
+  idempotencyKey: IdempotencyKey;
+  riseCheck: RiseCheck;
   schemaMigration: SchemaMigration;
   session: Session;
+  temperatureReading: TemperatureReading;
 }
