@@ -9,6 +9,11 @@ import { fileURLToPath } from 'node:url';
 
 const REFERENCE_DIR = fileURLToPath(new URL('../../../test-fixtures/reference/', import.meta.url));
 
+/** A file of the reference folder as text (e.g. a NIST StRD .dat file). */
+export function readReferenceText(relativePath: string): string {
+  return readFileSync(REFERENCE_DIR + relativePath, 'utf8');
+}
+
 /** A CSV file of the reference folder as rows of strings keyed by header (simple CSV with quotes). */
 export function readReferenceCsv(relativePath: string): Array<Record<string, string>> {
   const text = readFileSync(REFERENCE_DIR + relativePath, 'utf8');

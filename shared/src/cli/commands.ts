@@ -15,7 +15,12 @@ import type { Ingredient } from '../fermentation/formula/ingredient.js';
 import { fitRise } from '../fermentation/rise/fit-rise.js';
 import type { FitRiseInput } from '../fermentation/rise/rise-types.js';
 import type { FitCurveInput } from '../fermentation/curve/curve-fit-types.js';
-import { InputError, array, optionalArray, type JsonObject } from './input.js';
+import { predictBulkEnd } from '../fermentation/bulk/bulk-end.js';
+import { fitCultureKinetics } from '../fermentation/kinetics/fit-kinetics.js';
+import { predictNextPeak } from '../fermentation/kinetics/predict.js';
+import type { ObservedFeeding } from '../fermentation/kinetics/types.js';
+import { readBulkInput, readNextFeeding, readPastFeeding } from './fermentation-input.js';
+import { InputError, array, each, object, optionalArray, type JsonObject } from './input.js';
 
 export type Command = (input: JsonObject) => unknown;
 
@@ -72,10 +77,51 @@ function blendCommand(input: JsonObject): unknown {
   return blendFlours(flours, flourG);
 }
 
+function predictPeakCommand(input: JsonObject): unknown {
+  const past = each(array(input, 'history', ''), 'history', readPastFeeding);
+  const next = readNextFeeding(object(input.next, 'next'), 'next');
+  const usable: ObservedFeeding[] = past.flatMap((p) =>
+    p.hoursToPeak === null ? [] : [{ ...p.feeding, hoursToPeak: p.hoursToPeak }],
+  );
+  const kinetics = fitCultureKinetics(usable, { asOf: next.fedAt });
+  const prediction = predictNextPeak(kinetics, next);
+  const skipped = past.flatMap((p, index) => (p.note ? [{ index, reason: p.note }] : []));
+  return {
+    peakAt: prediction.peakAt,
+    low: prediction.low,
+    high: prediction.high,
+    level: 0.8,
+    hoursToPeak: prediction.hoursToPeak,
+    lowHours: prediction.lowHours,
+    highHours: prediction.highHours,
+    ...(prediction.q10 === undefined ? {} : { q10: prediction.q10 }),
+    model: prediction.model,
+    basis: prediction.basis,
+    feedingsUsed: prediction.feedingsUsed,
+    hoursToPeakAt24C1to1to1: kinetics.hoursToPeakAtReference,
+    trend: kinetics.trend.label,
+    ...(skipped.length ? { skipped } : {}),
+  };
+}
+
+function bulkEndCommand(input: JsonObject): unknown {
+  const dough = readBulkInput(input);
+  const history = optionalArray(input, 'history', '');
+  const usable: ObservedFeeding[] = history
+    ? each(history, 'history', readPastFeeding).flatMap((p) =>
+        p.hoursToPeak === null ? [] : [{ ...p.feeding, hoursToPeak: p.hoursToPeak }],
+      )
+    : [];
+  const kinetics = usable.length ? fitCultureKinetics(usable, { asOf: dough.mixedAt }) : undefined;
+  return predictBulkEnd(dough, kinetics ? { kinetics } : {});
+}
+
 export const COMMANDS: Record<string, Command> = {
   'fit-curve': fitCurveCommand,
   'fit-rise': fitRiseCommand,
   formula: formulaCommand,
   ddt: ddtCommand,
   blend: blendCommand,
+  'predict-peak': predictPeakCommand,
+  'bulk-end': bulkEndCommand,
 };
