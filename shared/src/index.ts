@@ -13,3 +13,4 @@ export * from './fermentation/kinetics/index.js';
 export * from './fermentation/bulk/index.js';
 export * from './fermentation/formula/index.js';
 export * from './fermentation/units/index.js';
+export * from './contracts/culture-summary.js';
