@@ -10,6 +10,7 @@ import { AccountService } from '../account/account.service.js';
 import { PasswordService } from '../auth/password.service.js';
 import type { AppConfig } from '../config.js';
 import { openDatabase } from '../db/database.js';
+import { seedDemoLogbook } from './demo-logbook.js';
 
 // The invented Larkspur Community Kitchen and its "Weekend Levain" class.
 const PEOPLE: { displayName: string; email: string; role: Role }[] = [
@@ -35,11 +36,15 @@ try {
     const service = new AccountService(repository, passwords);
     const shared = process.env.PEAKWISE_DEMO_PASSWORD;
     const made = [];
+    const accountIds = new Map<string, string>();
     for (const person of PEOPLE) {
       const password = shared ?? `loaf-${randomBytes(9).toString('base64url')}`;
-      await service.signUp({ ...person, password, timeZone: 'Europe/London' }, person.role);
+      const account = await service.signUp({ ...person, password, timeZone: 'Europe/London' }, person.role);
+      accountIds.set(person.email, account.id);
       made.push({ ...person, password });
     }
+    const feedings = await seedDemoLogbook(db, accountIds, new Date());
+    process.stdout.write(`seeded ${feedings} demo feedings with their rise checks\n`);
     const dataDir = process.env.PEAKWISE_DATA_DIR;
     if (dataDir) {
       mkdirSync(dataDir, { recursive: true });
