@@ -39,6 +39,7 @@ it('documents every route under /api', async () => {
       '/api/auth/sign-up',
       '/api/cultures',
       '/api/cultures/{id}',
+      '/api/cultures/{id}/summary',
       '/api/cultures/{cultureId}/feedings',
       '/api/feedings/{id}',
       '/api/feedings/{feedingId}/rise-checks',
