@@ -38,6 +38,22 @@ function createAppRouter() {
                   lazy: async () => ({ Component: (await import('./routes/home')).HomeRoute }),
                 },
                 {
+                  path: 'shelf',
+                  lazy: async () => ({ Component: (await import('./routes/shelf')).ShelfRoute }),
+                },
+                {
+                  path: 'cultures/:id',
+                  lazy: async () => ({ Component: (await import('./routes/culture')).CultureRoute }),
+                },
+                {
+                  path: 'cultures/:id/feed',
+                  lazy: async () => ({ Component: (await import('./routes/log-feeding')).LogFeedingRoute }),
+                },
+                {
+                  path: 'cultures/:id/rise-check',
+                  lazy: async () => ({ Component: (await import('./routes/rise-check')).RiseCheckRoute }),
+                },
+                {
                   path: 'account',
                   lazy: async () => ({
                     Component: (await import('./routes/account')).AccountRoute,

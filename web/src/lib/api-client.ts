@@ -42,7 +42,12 @@ async function readJson(response: Response): Promise<unknown> {
  * Calls the Peakwise API on the same origin. The session lives in an HttpOnly cookie, so there is
  * no token to attach; `same-origin` keeps that cookie away from any other host.
  */
-export async function apiRequest<T>(method: Method, path: string, body?: unknown): Promise<T> {
+export async function apiRequest<T>(
+  method: Method,
+  path: string,
+  body?: unknown,
+  extraHeaders?: Record<string, string>,
+): Promise<T> {
   let response: Response;
   try {
     response = await fetch(`/api${path}`, {
@@ -51,6 +56,7 @@ export async function apiRequest<T>(method: Method, path: string, body?: unknown
       headers: {
         Accept: 'application/json',
         ...(body === undefined ? {} : { 'Content-Type': 'application/json' }),
+        ...extraHeaders,
       },
       body: body === undefined ? undefined : JSON.stringify(body),
     });
@@ -82,6 +88,8 @@ export async function apiRequest<T>(method: Method, path: string, body?: unknown
 
 export const api = {
   get: <T>(path: string) => apiRequest<T>('GET', path),
-  post: <T>(path: string, body?: unknown) => apiRequest<T>('POST', path, body),
+  post: <T>(path: string, body?: unknown, headers?: Record<string, string>) =>
+    apiRequest<T>('POST', path, body, headers),
   patch: <T>(path: string, body?: unknown) => apiRequest<T>('PATCH', path, body),
+  delete: <T>(path: string) => apiRequest<T>('DELETE', path),
 };

@@ -1,5 +1,6 @@
 import AdminPanelSettingsOutlined from '@mui/icons-material/AdminPanelSettingsOutlined';
 import HomeOutlined from '@mui/icons-material/HomeOutlined';
+import KitchenOutlined from '@mui/icons-material/KitchenOutlined';
 import PersonOutlined from '@mui/icons-material/PersonOutlined';
 import type SvgIcon from '@mui/material/SvgIcon';
 import type { NavTarget } from './nav-match';
@@ -16,6 +17,7 @@ export interface NavItem extends NavTarget {
  * into the top bar's menu rather than shrinking the labels.
  */
 export const NAV_ITEMS: readonly NavItem[] = [
+  { label: 'Shelf', to: '/shelf', alsoSections: ['/cultures'], icon: KitchenOutlined },
   { label: 'Home', to: '/', icon: HomeOutlined },
   { label: 'Account', to: '/account', icon: PersonOutlined },
   {

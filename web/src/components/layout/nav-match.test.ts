@@ -33,3 +33,17 @@ describe('activeItem', () => {
     expect(activeItem(items, '/nowhere')).toBeUndefined();
   });
 });
+
+describe('activeItem with more sections', () => {
+  const shelf: (NavTarget & { label: string })[] = [
+    { label: 'Shelf', to: '/shelf', alsoSections: ['/cultures'] },
+    { label: 'Home', to: '/' },
+  ];
+  it.each([
+    ['/shelf', 'Shelf'],
+    ['/cultures/abc/feed', 'Shelf'],
+    ['/', 'Home'],
+  ])('highlights the entry for %s', (pathname, label) => {
+    expect(activeItem(shelf, pathname)?.label).toBe(label);
+  });
+});

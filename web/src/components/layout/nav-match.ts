@@ -6,6 +6,8 @@ export interface NavTarget {
   to: string;
   /** Path prefix that counts as "in this section"; defaults to `to`. */
   section?: string;
+  /** More path prefixes that count as this section (the Shelf owns /cultures/… too). */
+  alsoSections?: readonly string[];
   /** Roles that see the entry; everyone signed in when left out. */
   roles?: readonly Role[];
 }
@@ -14,19 +16,22 @@ export function visibleFor<T extends NavTarget>(items: readonly T[], role: Role)
   return items.filter((item) => !item.roles || item.roles.includes(role));
 }
 
-function inSection(item: NavTarget, pathname: string): boolean {
-  const section = item.section ?? item.to;
-  // Home ("/") is a prefix of everything, so it only matches itself.
-  if (section === '/') return pathname === '/';
-  return pathname === section || pathname.startsWith(`${section}/`);
+function matchedSection(item: NavTarget, pathname: string): string | undefined {
+  return [item.section ?? item.to, ...(item.alsoSections ?? [])].find((section) =>
+    // Home ("/") is a prefix of everything, so it only matches itself.
+    section === '/' ? pathname === '/' : pathname === section || pathname.startsWith(`${section}/`),
+  );
 }
 
 /** The entry to highlight for `pathname`: the longest matching section wins. */
 export function activeItem<T extends NavTarget>(items: readonly T[], pathname: string): T | undefined {
   let best: T | undefined;
+  let bestLength = -1;
   for (const item of items) {
-    if (!inSection(item, pathname)) continue;
-    if (!best || (item.section ?? item.to).length > (best.section ?? best.to).length) best = item;
+    const section = matchedSection(item, pathname);
+    if (section === undefined || section.length <= bestLength) continue;
+    best = item;
+    bestLength = section.length;
   }
   return best;
 }

@@ -17,8 +17,7 @@ export function NextStepsCard({ account }: { account: Account }) {
           What comes next
         </Typography>
         <Typography sx={{ mb: 1.5 }}>
-          Your account is ready. The Shelf, where you’ll add your first culture and log its feedings, is the next part
-          of Peakwise being built.
+          Your cultures live on the Shelf: add one, log its feedings and rise checks, and see when it will be ready.
         </Typography>
         <Typography>
           Until then, check that Peakwise speaks your kitchen’s language. You’re set to{' '}
@@ -27,8 +26,11 @@ export function NextStepsCard({ account }: { account: Account }) {
           use.
         </Typography>
       </CardContent>
-      <CardActions sx={{ px: 2, pb: 2 }}>
-        <Button component={RouterLink} to="/account" variant="contained">
+      <CardActions sx={{ px: 2, pb: 2, gap: 1, flexWrap: 'wrap' }}>
+        <Button component={RouterLink} to="/shelf" variant="contained" size="large">
+          Go to your Shelf
+        </Button>
+        <Button component={RouterLink} to="/account" variant="outlined">
           Check units and time zone
         </Button>
       </CardActions>

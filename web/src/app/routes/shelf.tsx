@@ -1,0 +1,5 @@
+import { ShelfPage } from '@/features/shelf/components/shelf-page';
+
+export function ShelfRoute() {
+  return <ShelfPage />;
+}

@@ -1,0 +1,50 @@
+import { LoadError } from '@/components/feedback/load-error';
+import { PageLoader } from '@/components/feedback/page-loader';
+import { Page } from '@/components/layout/page';
+import { useSignedInAccount } from '@/lib/auth/use-signed-in-account';
+import { useCulture } from '@/lib/logbook/get-culture';
+import { useCultureSummary } from '@/lib/logbook/get-culture-summary';
+import { useNow } from '@/lib/use-now';
+import { FeedingsTable } from './feedings-table';
+import { ForecastHeader } from './forecast-header';
+import { KineticsCard } from './kinetics-card';
+import { LineageCard } from './lineage-card';
+import { RiseOverlayCard } from './rise-overlay-card';
+import { RunningRiseCard } from './running-rise-card';
+
+/** One culture: where it stands, this feeding's rise, how it answers to temperature, its history. */
+export function CulturePage({ cultureId }: { cultureId: string }) {
+  const account = useSignedInAccount();
+  const culture = useCulture(cultureId);
+  const summary = useCultureSummary(cultureId);
+  const now = useNow();
+
+  if (culture.isPending) return <PageLoader />;
+  if (culture.isError) return <LoadError error={culture.error} onRetry={() => void culture.refetch()} />;
+  const c = culture.data;
+  const intro = [
+    c.defaultFlour,
+    c.defaultHydrationPct !== null ? `${c.defaultHydrationPct} % hydration` : null,
+    c.location === 'fridge' ? 'in the fridge' : 'on the counter',
+  ]
+    .filter(Boolean)
+    .join(' · ');
+
+  return (
+    <Page title={c.name} intro={intro}>
+      <ForecastHeader
+        cultureId={cultureId}
+        summary={summary.data}
+        summaryFailed={summary.isError}
+        lastFedAt={summary.data?.lastFedAt ?? c.lastFedAt}
+        account={account}
+        now={now}
+      />
+      {summary.data?.running && <RunningRiseCard running={summary.data.running} account={account} now={now} />}
+      <RiseOverlayCard cultureId={cultureId} account={account} />
+      {summary.data && <KineticsCard kinetics={summary.data.kinetics} unit={account.temperatureUnit} />}
+      <FeedingsTable cultureId={cultureId} account={account} />
+      <LineageCard culture={c} />
+    </Page>
+  );
+}

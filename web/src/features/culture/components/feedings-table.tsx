@@ -1,0 +1,103 @@
+import type { Account, SortOrder } from '@peakwise/shared';
+import Box from '@mui/material/Box';
+import Card from '@mui/material/Card';
+import CardContent from '@mui/material/CardContent';
+import Table from '@mui/material/Table';
+import TableBody from '@mui/material/TableBody';
+import TableCell from '@mui/material/TableCell';
+import TableContainer from '@mui/material/TableContainer';
+import TableHead from '@mui/material/TableHead';
+import TablePagination from '@mui/material/TablePagination';
+import TableRow from '@mui/material/TableRow';
+import TableSortLabel from '@mui/material/TableSortLabel';
+import Typography from '@mui/material/Typography';
+import { useState } from 'react';
+import { formatTemperature } from '@peakwise/shared';
+import { LoadError } from '@/components/feedback/load-error';
+import { formatHeight, formatWeights } from '@/lib/format/units';
+import { useFeedings } from '@/lib/logbook/get-feedings';
+
+const when = (iso: string, timeZone: string) =>
+  new Date(iso).toLocaleString('en-GB', { timeZone, dateStyle: 'medium', timeStyle: 'short' });
+
+/** Every feeding of the culture, newest first unless turned around, a page at a time. */
+export function FeedingsTable({ cultureId, account }: { cultureId: string; account: Account }) {
+  const [order, setOrder] = useState<SortOrder>('desc');
+  const [page, setPage] = useState(0);
+  const [rowsPerPage, setRowsPerPage] = useState(10);
+  const feedings = useFeedings(cultureId, { order, limit: rowsPerPage, offset: page * rowsPerPage });
+
+  return (
+    <Card>
+      <CardContent>
+        <Typography variant="h2" gutterBottom>
+          Feedings
+        </Typography>
+        {feedings.isError && <LoadError error={feedings.error} onRetry={() => void feedings.refetch()} />}
+        {feedings.data && feedings.data.total === 0 && <Typography color="text.secondary">No feedings yet.</Typography>}
+        {feedings.data && feedings.data.total > 0 && (
+          <>
+            <TableContainer>
+              <Table size="small" aria-label="Feedings">
+                <TableHead>
+                  <TableRow>
+                    <TableCell sortDirection={order}>
+                      <TableSortLabel
+                        active
+                        direction={order}
+                        onClick={() => {
+                          setOrder(order === 'desc' ? 'asc' : 'desc');
+                          setPage(0);
+                        }}
+                      >
+                        Fed at
+                      </TableSortLabel>
+                    </TableCell>
+                    <TableCell align="right">
+                      <Box component="span" sx={{ display: { xs: 'none', sm: 'inline' } }}>
+                        Starter : flour : water
+                      </Box>
+                      <Box component="span" sx={{ display: { xs: 'inline', sm: 'none' } }}>
+                        Fed with
+                      </Box>
+                    </TableCell>
+                    <TableCell align="right">Temperature</TableCell>
+                    <TableCell align="right">Start height</TableCell>
+                  </TableRow>
+                </TableHead>
+                <TableBody>
+                  {feedings.data.items.map((f) => (
+                    <TableRow key={f.id}>
+                      <TableCell>{when(f.fedAt, account.timeZone)}</TableCell>
+                      <TableCell align="right">
+                        {formatWeights([f.starterG, f.flourG, f.waterG], account.unitSystem)}
+                      </TableCell>
+                      <TableCell align="right">
+                        {f.temperatureC === null ? '—' : formatTemperature(f.temperatureC, account.temperatureUnit, 1)}
+                      </TableCell>
+                      <TableCell align="right">
+                        {f.initialHeightMm === null ? '—' : formatHeight(f.initialHeightMm, account.unitSystem)}
+                      </TableCell>
+                    </TableRow>
+                  ))}
+                </TableBody>
+              </Table>
+            </TableContainer>
+            <TablePagination
+              component="div"
+              count={feedings.data.total}
+              page={page}
+              onPageChange={(_, p) => setPage(p)}
+              rowsPerPage={rowsPerPage}
+              rowsPerPageOptions={[10, 25, 50]}
+              onRowsPerPageChange={(e) => {
+                setRowsPerPage(Number(e.target.value));
+                setPage(0);
+              }}
+            />
+          </>
+        )}
+      </CardContent>
+    </Card>
+  );
+}
