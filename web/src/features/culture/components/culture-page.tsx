@@ -1,3 +1,4 @@
+import Typography from '@mui/material/Typography';
 import { LoadError } from '@/components/feedback/load-error';
 import { PageLoader } from '@/components/feedback/page-loader';
 import { Page } from '@/components/layout/page';
@@ -29,9 +30,16 @@ export function CulturePage({ cultureId }: { cultureId: string }) {
   ]
     .filter(Boolean)
     .join(' · ');
+  // The baker's own notes, and for the demo cultures the line saying their history is generated.
+  const notes = c.notes ? (
+    <Typography variant="body2" color="text.secondary" sx={{ whiteSpace: 'pre-line' }}>
+      {c.notes}
+    </Typography>
+  ) : null;
 
   return (
     <Page title={c.name} intro={intro}>
+      {notes}
       <ForecastHeader
         cultureId={cultureId}
         summary={summary.data}
