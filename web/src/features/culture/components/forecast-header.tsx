@@ -1,13 +1,10 @@
 import type { Account, CultureSummary } from '@peakwise/shared';
-import AddCircleOutline from '@mui/icons-material/AddCircleOutlineOutlined';
-import Straighten from '@mui/icons-material/Straighten';
 import Alert from '@mui/material/Alert';
-import Button from '@mui/material/Button';
 import Card from '@mui/material/Card';
 import CardContent from '@mui/material/CardContent';
 import Stack from '@mui/material/Stack';
 import Typography from '@mui/material/Typography';
-import { Link as RouterLink } from 'react-router-dom';
+import { LogbookActions } from '@/components/logbook/logbook-actions';
 import { StateChip } from '@/components/logbook/state-chip';
 import { formatAgo, formatClock } from '@/lib/format/duration';
 import { forecastWords, readyWindowOf } from '@/lib/logbook/forecast-words';
@@ -52,27 +49,7 @@ export function ForecastHeader({ cultureId, summary, summaryFailed, lastFedAt, a
           {summary?.caution && <Alert severity="error">{summary.caution}</Alert>}
         </Stack>
         <Stack direction="row" spacing={1} sx={{ mt: 2 }}>
-          <Button
-            component={RouterLink}
-            to={`/cultures/${cultureId}/feed`}
-            variant="contained"
-            size="large"
-            fullWidth
-            startIcon={<AddCircleOutline />}
-          >
-            Log feeding
-          </Button>
-          <Button
-            component={RouterLink}
-            to={`/cultures/${cultureId}/rise-check`}
-            variant="outlined"
-            size="large"
-            fullWidth
-            startIcon={<Straighten />}
-            disabled={!lastFedAt}
-          >
-            Rise check
-          </Button>
+          <LogbookActions cultureId={cultureId} lastFedAt={lastFedAt} />
         </Stack>
       </CardContent>
     </Card>

@@ -1,8 +1,5 @@
 import type { Culture } from '@peakwise/shared';
-import AddCircleOutline from '@mui/icons-material/AddCircleOutlineOutlined';
-import Straighten from '@mui/icons-material/Straighten';
 import Box from '@mui/material/Box';
-import Button from '@mui/material/Button';
 import Card from '@mui/material/Card';
 import CardActionArea from '@mui/material/CardActionArea';
 import CardActions from '@mui/material/CardActions';
@@ -11,6 +8,7 @@ import Skeleton from '@mui/material/Skeleton';
 import Stack from '@mui/material/Stack';
 import Typography from '@mui/material/Typography';
 import { Link as RouterLink } from 'react-router-dom';
+import { LogbookActions } from '@/components/logbook/logbook-actions';
 import { RiseChart } from '@/components/charts/rise-chart';
 import { StateChip } from '@/components/logbook/state-chip';
 import { formatAgo } from '@/lib/format/duration';
@@ -70,27 +68,7 @@ export function CultureCard({ culture }: { culture: Culture }) {
         </CardContent>
       </CardActionArea>
       <CardActions sx={{ px: 2, pb: 2, gap: 1 }}>
-        <Button
-          component={RouterLink}
-          to={`/cultures/${culture.id}/feed`}
-          variant="contained"
-          size="large"
-          fullWidth
-          startIcon={<AddCircleOutline />}
-        >
-          Log feeding
-        </Button>
-        <Button
-          component={RouterLink}
-          to={`/cultures/${culture.id}/rise-check`}
-          variant="outlined"
-          size="large"
-          fullWidth
-          startIcon={<Straighten />}
-          disabled={!lastFedAt}
-        >
-          Rise check
-        </Button>
+        <LogbookActions cultureId={culture.id} lastFedAt={lastFedAt} />
       </CardActions>
     </Card>
   );
