@@ -11,6 +11,7 @@ import { DatabaseModule } from './db/database.module.js';
 import type { DatabaseHandle } from './db/database.js';
 import { FeedingModule } from './feeding/feeding.module.js';
 import { HealthModule } from './health/health.module.js';
+import { LogbookTransferModule } from './logbook-transfer/logbook-transfer.module.js';
 import { RiseCheckModule } from './rise-check/rise-check.module.js';
 import { TemperatureModule } from './temperature/temperature.module.js';
 
@@ -30,6 +31,7 @@ export class AppModule {
         FeedingModule,
         RiseCheckModule,
         TemperatureModule,
+        LogbookTransferModule,
       ],
       providers: [{ provide: APP_GUARD, useClass: SessionGuard }],
     };

@@ -32,6 +32,7 @@ it('documents every route under /api', async () => {
     [
       '/api/account',
       '/api/account/password',
+      '/api/account/export.json',
       '/api/admin/accounts',
       '/api/admin/accounts/{id}/role',
       '/api/auth/sign-in',
@@ -40,6 +41,8 @@ it('documents every route under /api', async () => {
       '/api/cultures',
       '/api/cultures/{id}',
       '/api/cultures/{id}/summary',
+      '/api/cultures/{id}/export.csv',
+      '/api/cultures/{id}/import',
       '/api/cultures/{cultureId}/feedings',
       '/api/feedings/{id}',
       '/api/feedings/{feedingId}/rise-checks',

@@ -1,0 +1,286 @@
+import type { Culture, Feeding, RiseCheck } from '@peakwise/shared';
+import Papa from 'papaparse';
+import { afterAll, beforeAll, beforeEach, describe, expect, it } from 'vitest';
+import { expectError, signUp, type InjectResponse, type SignedUp } from './helpers.js';
+import { createTestApp, resetDatabase, type TestApp } from './test-app.js';
+
+let t: TestApp;
+beforeAll(async () => {
+  t = await createTestApp();
+});
+afterAll(() => t.close());
+
+let theo: SignedUp;
+let culture: Culture;
+let other: Culture;
+beforeEach(async () => {
+  await resetDatabase(t.db);
+  theo = await signUp(t.app, { displayName: 'Theo Park' });
+  culture = (await call('POST', '/api/cultures', { name: 'Bramble "the rye" / №1' })).json<Culture>();
+  other = (await call('POST', '/api/cultures', { name: 'Copy' })).json<Culture>();
+});
+
+function call(
+  method: 'GET' | 'POST',
+  url: string,
+  payload?: unknown,
+  cookie: string = theo.cookie,
+): Promise<InjectResponse> {
+  return t.app.inject({ method, url, payload: payload as never, headers: { cookie } });
+}
+
+const HEADER =
+  'fed_at,starter_g,flour_g,water_g,flour,temperature_c,water_temperature_c,initial_height_mm,observations,notes,check_taken_at,check_height_mm,check_temperature_c';
+const TRICKY_NOTES = 'Fed late, "very" sour;\nsmelled like "apples, vinegar"';
+
+async function post(url: string, payload: unknown, status = 201): Promise<unknown> {
+  const res = await call('POST', url, payload);
+  expect(res.statusCode, res.body).toBe(status);
+  return res.json();
+}
+
+/** Two feedings with checks and one without, in the first culture. */
+async function seedLogbook(): Promise<void> {
+  const a = (await post(`/api/cultures/${culture.id}/feedings`, {
+    fedAt: '2025-02-01T07:30:00Z',
+    starterG: 20,
+    flourG: 100,
+    waterG: 90.5,
+    flour: 'whole rye, stone-ground',
+    temperatureC: 22.5,
+    waterTemperatureC: 27,
+    initialHeightMm: 40,
+    observations: ['bubbles', 'sour-smell'],
+    notes: TRICKY_NOTES,
+  })) as Feeding;
+  await post(`/api/feedings/${a.id}/rise-checks`, { takenAt: '2025-02-01T10:30:00Z', heightMm: 60, temperatureC: 23 });
+  await post(`/api/feedings/${a.id}/rise-checks`, { takenAt: '2025-02-01T13:30:00Z', heightMm: 82.5 });
+  await post(`/api/feedings/${a.id}/temperatures`, {
+    readings: [{ takenAt: '2025-02-01T08:00:00Z', temperatureC: 21 }],
+  });
+  const b = (await post(`/api/cultures/${culture.id}/feedings`, {
+    fedAt: '2025-02-02T07:30:00Z',
+    starterG: 10,
+    flourG: 50,
+    waterG: 50,
+  })) as Feeding;
+  await post(`/api/feedings/${b.id}/rise-checks`, { takenAt: '2025-02-02T12:00:00Z', heightMm: 70 });
+  await post(`/api/cultures/${culture.id}/feedings`, {
+    fedAt: '2025-02-03T07:30:00Z',
+    starterG: 5,
+    flourG: 25,
+    waterG: 25,
+  });
+}
+
+async function exportCsv(id = culture.id): Promise<string> {
+  const res = await call('GET', `/api/cultures/${id}/export.csv`);
+  expect(res.statusCode, res.body).toBe(200);
+  return res.body;
+}
+
+const importUrl = (id = other.id) => `/api/cultures/${id}/import`;
+
+/** The logbook of a culture without ids and timestamps, to compare two cultures by value. */
+async function logbook(id: string) {
+  const feedings = (await call('GET', `/api/cultures/${id}/feedings?order=asc`)).json<{ items: Feeding[] }>().items;
+  return Promise.all(
+    feedings.map(async ({ id: feedingId, cultureId: _c, createdAt: _a, updatedAt: _u, ...feeding }) => {
+      const checks = (await call('GET', `/api/feedings/${feedingId}/rise-checks`)).json<{ items: RiseCheck[] }>();
+      return {
+        ...feeding,
+        checks: checks.items.map(({ takenAt, heightMm, temperatureC }) => ({ takenAt, heightMm, temperatureC })),
+      };
+    }),
+  );
+}
+
+const counts = async () => ({
+  feedings: (await t.db.selectFrom('feeding').select('id').execute()).length,
+  checks: (await t.db.selectFrom('riseCheck').select('id').execute()).length,
+});
+
+describe('GET /api/cultures/:id/export.csv', () => {
+  it('answers one row per rise check with a header, as an attachment with a safe name', async () => {
+    await seedLogbook();
+    const res = await call('GET', `/api/cultures/${culture.id}/export.csv`);
+    expect(res.statusCode, res.body).toBe(200);
+    expect(res.headers['content-type']).toBe('text/csv; charset=utf-8');
+    expect(res.headers['content-disposition']).toBe('attachment; filename="Bramble-the-rye-No1-feedings.csv"');
+    const parsed = Papa.parse<Record<string, string>>(res.body, { header: true, skipEmptyLines: true });
+    expect(parsed.meta.fields).toEqual(HEADER.split(','));
+    expect(parsed.data).toHaveLength(4);
+    expect(parsed.data[0]).toMatchObject({
+      fed_at: '2025-02-01T07:30:00.000Z',
+      flour: 'whole rye, stone-ground',
+      observations: 'bubbles;sour-smell',
+      notes: TRICKY_NOTES,
+      check_taken_at: '2025-02-01T10:30:00.000Z',
+      check_height_mm: '60',
+      check_temperature_c: '23',
+    });
+    expect(parsed.data[3]).toMatchObject({
+      fed_at: '2025-02-03T07:30:00.000Z',
+      check_taken_at: '',
+      check_height_mm: '',
+    });
+  });
+
+  it("answers 404 for another account's culture", async () => {
+    const sam = await signUp(t.app, { displayName: 'Sam' });
+    expectError(await call('GET', `/api/cultures/${culture.id}/export.csv`, undefined, sam.cookie), 404);
+  });
+});
+
+describe('POST /api/cultures/:id/import', () => {
+  it('re-imports an export into another culture with the same values, and a second time as duplicates', async () => {
+    await seedLogbook();
+    const csv = await exportCsv();
+    const res = await call('POST', importUrl(), { csv });
+    expect(res.statusCode, res.body).toBe(200);
+    expect(res.json()).toMatchObject({
+      dryRun: false,
+      feedings: { new: 3, duplicate: 0 },
+      riseChecks: { new: 3, duplicate: 0 },
+      errors: [],
+    });
+    expect(res.json<{ preview: unknown[] }>().preview).toHaveLength(4);
+    const copied = await logbook(other.id);
+    expect(copied).toEqual(await logbook(culture.id));
+    expect(copied[0]!.notes).toBe(TRICKY_NOTES);
+
+    const before = await counts();
+    const again = await call('POST', importUrl(), { csv });
+    expect(again.statusCode, again.body).toBe(200);
+    expect(again.json()).toMatchObject({ feedings: { new: 0, duplicate: 3 }, riseChecks: { new: 0, duplicate: 3 } });
+    expect(await counts()).toEqual(before);
+    // The exported culture itself, too: everything in it is already there.
+    const self = await call('POST', importUrl(culture.id), { csv });
+    expect(self.json()).toMatchObject({ feedings: { new: 0, duplicate: 3 }, riseChecks: { new: 0, duplicate: 3 } });
+    expect(await counts()).toEqual(before);
+  });
+
+  it('refuses a file with bad rows, naming line and column, and writes nothing', async () => {
+    const csv = [
+      HEADER,
+      '2025-03-01T07:00:00Z,20,100,100,,,,40,,,2025-03-01T09:00:00Z,50,',
+      '2025-03-01T07:00:00Z,20,100,100,,,,40,,,2025-03-01T10:00:00Z,60,',
+      '2025-03-02T07:00:00Z,20,100,100,,80,,,,,,,',
+      '2025-03-03T07:00:00Z,20,100,100,,,,,,"two\nlines",,,',
+      'yesterday,20,100,100,,,,,,,,,',
+    ].join('\n');
+    const before = await counts();
+    const res = await call('POST', importUrl(), { csv });
+    const body = expectError(res, 400);
+    expect(body.details).toEqual([
+      { field: 'line 4: temperature_c', message: expect.stringContaining('temperature') as string },
+      { field: 'line 7: fed_at', message: expect.stringContaining('ISO 8601') as string },
+    ]);
+    expect(await counts()).toEqual(before);
+
+    const dry = await call('POST', importUrl(), { csv, dryRun: true });
+    expect(dry.statusCode, dry.body).toBe(200);
+    expect(dry.json()).toMatchObject({
+      dryRun: true,
+      feedings: { new: 2, duplicate: 0 },
+      riseChecks: { new: 2, duplicate: 0 },
+      errors: [
+        { line: 4, field: 'temperature_c' },
+        { line: 7, field: 'fed_at' },
+      ],
+    });
+    expect(await counts()).toEqual(before);
+  });
+
+  it('applies the feeding and rise-check rules: weights, observations, checks before the feeding', async () => {
+    const csv = [
+      HEADER,
+      '2025-03-01T07:00:00Z,,100,abc,,,,,bubbles;fizz,,,,',
+      '2025-03-02T07:00:00Z,20,100,100,,,,,,,2025-03-02T06:00:00Z,50,',
+      '2025-03-03T07:00:00Z,20,100,100,,,,,,,2025-03-03T08:00:00Z,,',
+    ].join('\r\n');
+    const res = await call('POST', importUrl(), { csv, dryRun: true });
+    expect(res.statusCode, res.body).toBe(200);
+    expect(
+      res.json<{ errors: Array<{ line: number; field: string }> }>().errors.map((e) => `${e.line} ${e.field}`),
+    ).toEqual(['2 starter_g', '2 water_g', '2 observations', '3 check_taken_at', '4 check_height_mm']);
+  });
+
+  it('a dry run counts and previews but writes nothing', async () => {
+    await seedLogbook();
+    const csv = await exportCsv();
+    const before = await counts();
+    const res = await call('POST', importUrl(), { csv, dryRun: true });
+    expect(res.statusCode, res.body).toBe(200);
+    expect(res.json()).toMatchObject({ dryRun: true, feedings: { new: 3 }, riseChecks: { new: 3 }, errors: [] });
+    expect(await counts()).toEqual(before);
+  });
+
+  it('reads renamed headers through a mapping', async () => {
+    const csv = [
+      'When,Starter,Flour g,Water g,Note,Checked,Height',
+      '2025-03-01T08:00:00+01:00,20,100,100,"a, b",2025-03-01T09:00:00Z,55',
+      '2025-03-01T08:00:00+01:00,20,100,100,"a, b",2025-03-01T10:00:00Z,70',
+    ].join('\n');
+    const mapping = {
+      fed_at: 'When',
+      starter_g: 'Starter',
+      flour_g: 'Flour g',
+      water_g: 'Water g',
+      notes: 'Note',
+      check_taken_at: 'Checked',
+      check_height_mm: 'Height',
+    };
+    const res = await call('POST', importUrl(), { csv, mapping });
+    expect(res.statusCode, res.body).toBe(200);
+    expect(res.json()).toMatchObject({ feedings: { new: 1, duplicate: 0 }, riseChecks: { new: 2, duplicate: 0 } });
+    const [feeding] = await logbook(other.id);
+    expect(feeding).toMatchObject({ fedAt: '2025-03-01T07:00:00.000Z', starterG: 20, notes: 'a, b' });
+    expect(feeding!.checks.map((c) => c.heightMm)).toEqual([55, 70]);
+
+    expectError(await call('POST', importUrl(), { csv, mapping: { ...mapping, fed_at: 'Date' } }), 400);
+    expectError(await call('POST', importUrl(), { csv, mapping: { colour: 'x' } }), 400);
+  });
+
+  it('refuses more than 5,000 rows', async () => {
+    const row = '2025-03-01T07:00:00Z,20,100,100,,,,,,,,,';
+    const csv = [HEADER, ...Array<string>(5001).fill(row)].join('\n');
+    const body = expectError(await call('POST', importUrl(), { csv }), 400);
+    expect(body.details?.[0]?.field).toBe('csv');
+  });
+
+  it('refuses a body over 1 MB', async () => {
+    const res = await call('POST', importUrl(), { csv: `${HEADER}\n${'x'.repeat(1024 * 1024)}` });
+    expect(res.statusCode).toBe(413);
+    expect(await counts()).toEqual({ feedings: 0, checks: 0 });
+  });
+
+  it("answers 404 for another account's culture and 400 for a body without csv", async () => {
+    const sam = await signUp(t.app, { displayName: 'Sam' });
+    expectError(await call('POST', importUrl(), { csv: HEADER }, sam.cookie), 404);
+    expectError(await call('POST', importUrl(), {}), 400);
+  });
+});
+
+describe('GET /api/account/export.json', () => {
+  it('holds the whole account and no password hash', async () => {
+    await seedLogbook();
+    const res = await call('GET', '/api/account/export.json');
+    expect(res.statusCode, res.body).toBe(200);
+    expect(res.body).not.toMatch(/password/i);
+    const body = res.json<Record<string, unknown[]> & { account: { email: string } }>();
+    expect(body).toMatchObject({ format: 'peakwise-export', version: 1, exportedAt: expect.any(String) as string });
+    expect(body.account.email).toBe(theo.email);
+    expect(body.cultures).toHaveLength(2);
+    expect(body.feedings).toHaveLength(3);
+    expect(body.riseChecks).toHaveLength(3);
+    expect(body.temperatureReadings).toHaveLength(1);
+
+    const sam = await signUp(t.app, { displayName: 'Sam' });
+    const empty = (await call('GET', '/api/account/export.json', undefined, sam.cookie)).json<
+      Record<string, unknown[]>
+    >();
+    expect(empty.cultures).toEqual([]);
+    expect(empty.feedings).toEqual([]);
+  });
+});
