@@ -1,6 +1,6 @@
 import type { Culture } from '@peakwise/shared';
 import { afterAll, beforeAll, beforeEach, describe, expect, it } from 'vitest';
-import { expectFieldErrors, signUp, type InjectResponse, type SignedUp } from './helpers.js';
+import { expectFieldErrors, signUp, type InjectResponse, type SignedUp, send } from './helpers.js';
 import { createTestApp, resetDatabase, type TestApp } from './test-app.js';
 
 let t: TestApp;
@@ -16,7 +16,7 @@ beforeEach(async () => {
 });
 
 function call(method: 'GET' | 'POST' | 'PATCH' | 'DELETE', url: string, payload?: unknown): Promise<InjectResponse> {
-  return t.app.inject({ method, url, payload: payload as never, headers: { cookie: theo.cookie } });
+  return send(t.app, method, url, theo.cookie, payload);
 }
 
 async function create(payload: Record<string, unknown>): Promise<Culture> {

@@ -11,7 +11,7 @@ import {
 } from '@peakwise/shared';
 import { afterAll, afterEach, beforeAll, beforeEach, describe, expect, it, vi } from 'vitest';
 import { SummaryClock } from '../src/culture/culture-summary.service.js';
-import { expectError, signUp, type InjectResponse, type SignedUp } from './helpers.js';
+import { expectError, signUp, type InjectResponse, type SignedUp, send } from './helpers.js';
 import { createTestApp, resetDatabase, type TestApp } from './test-app.js';
 
 // Test data is logged through the real routes at times in the past; the summary's "now" is the
@@ -36,7 +36,7 @@ const ago = (hours: number) => new Date(Date.now() - hours * HOUR).toISOString()
 const later = (iso: string, hours: number) => new Date(Date.parse(iso) + hours * HOUR).toISOString();
 
 function call(method: 'GET' | 'POST', url: string, payload?: unknown, cookie = theo.cookie): Promise<InjectResponse> {
-  return t.app.inject({ method, url, payload: payload as never, headers: { cookie } });
+  return send(t.app, method, url, cookie, payload);
 }
 
 async function post<T>(url: string, payload: unknown): Promise<T> {

@@ -156,3 +156,16 @@ export function expectNoInternals(res: InjectResponse): void {
   expect(body).not.toMatch(/relation|violates|constraint|column|syntax error|postgres|kysely/i);
   expect(body).not.toMatch(/node_modules|\.ts:\d+|\.js:\d+/);
 }
+
+export type HttpMethod = 'GET' | 'POST' | 'PATCH' | 'DELETE';
+
+/** One request through the real app, signed in with `cookie` (or anonymous when null). */
+export function send(
+  app: NestFastifyApplication,
+  method: HttpMethod,
+  url: string,
+  cookie: string | null,
+  payload?: unknown,
+): Promise<InjectResponse> {
+  return app.inject({ method, url, payload: payload as never, headers: cookie ? { cookie } : {} });
+}

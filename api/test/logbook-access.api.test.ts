@@ -1,6 +1,14 @@
 import type { Culture, Feeding, RiseCheck, TemperatureReadingBatchResponse } from '@peakwise/shared';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { expectError, expectFieldErrors, signUp, type InjectResponse, type SignedUp } from './helpers.js';
+import {
+  expectError,
+  expectFieldErrors,
+  signUp,
+  type InjectResponse,
+  type SignedUp,
+  send,
+  type HttpMethod,
+} from './helpers.js';
 import { createTestApp, resetDatabase, type TestApp } from './test-app.js';
 
 // Every logbook route, asked by the owner, by another baker, without a session, and with an id
@@ -14,10 +22,8 @@ let feeding: Feeding;
 let check: RiseCheck;
 let readingId: string;
 
-type Method = 'GET' | 'POST' | 'PATCH' | 'DELETE';
-
-function call(method: Method, url: string, cookie: string | null, payload?: unknown): Promise<InjectResponse> {
-  return t.app.inject({ method, url, payload: payload as never, headers: cookie ? { cookie } : {} });
+function call(method: HttpMethod, url: string, cookie: string | null, payload?: unknown): Promise<InjectResponse> {
+  return send(t.app, method, url, cookie, payload);
 }
 
 async function created<T>(res: InjectResponse): Promise<T> {
@@ -59,7 +65,7 @@ afterAll(() => t.close());
 
 interface Route {
   name: string;
-  method: Method;
+  method: HttpMethod;
   url: () => string;
   /** The id parameter's name, and the URL with a non-uuid in its place. */
   param: [string, string];

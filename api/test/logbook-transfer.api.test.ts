@@ -1,7 +1,7 @@
 import type { Culture, Feeding, RiseCheck } from '@peakwise/shared';
 import Papa from 'papaparse';
 import { afterAll, beforeAll, beforeEach, describe, expect, it } from 'vitest';
-import { expectError, signUp, type InjectResponse, type SignedUp } from './helpers.js';
+import { expectError, signUp, type InjectResponse, type SignedUp, send } from './helpers.js';
 import { createTestApp, resetDatabase, type TestApp } from './test-app.js';
 
 let t: TestApp;
@@ -26,7 +26,7 @@ function call(
   payload?: unknown,
   cookie: string = theo.cookie,
 ): Promise<InjectResponse> {
-  return t.app.inject({ method, url, payload: payload as never, headers: { cookie } });
+  return send(t.app, method, url, cookie, payload);
 }
 
 const HEADER =

@@ -5,7 +5,7 @@ import type {
   TemperatureReadingListResponse,
 } from '@peakwise/shared';
 import { afterAll, beforeAll, beforeEach, describe, expect, it } from 'vitest';
-import { expectError, expectFieldErrors, signUp, type InjectResponse, type SignedUp } from './helpers.js';
+import { expectError, expectFieldErrors, signUp, type InjectResponse, type SignedUp, send } from './helpers.js';
 import { createTestApp, resetDatabase, type TestApp } from './test-app.js';
 
 let t: TestApp;
@@ -28,7 +28,7 @@ beforeEach(async () => {
 });
 
 function call(method: 'GET' | 'POST' | 'DELETE', url: string, payload?: unknown): Promise<InjectResponse> {
-  return t.app.inject({ method, url, payload: payload as never, headers: { cookie: theo.cookie } });
+  return send(t.app, method, url, theo.cookie, payload);
 }
 
 const url = () => `/api/feedings/${feeding.id}/temperatures`;
