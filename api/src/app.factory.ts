@@ -6,6 +6,7 @@ import fastifySession from '@fastify/session';
 import { NestFactory } from '@nestjs/core';
 import { FastifyAdapter, type NestFastifyApplication } from '@nestjs/platform-fastify';
 import { DocumentBuilder, SwaggerModule, type OpenAPIObject } from '@nestjs/swagger';
+import { REQUEST_BODY_MAX_BYTES } from '@peakwise/shared';
 import connectPgSimple from 'connect-pg-simple';
 import expressSession from 'express-session';
 import type { Logger } from 'pino';
@@ -29,7 +30,7 @@ export function createAdapter(logger: Logger): FastifyAdapter {
     // Honour a caller's request id (a proxy, a test) or make one, so log lines can be followed.
     requestIdHeader: 'x-request-id',
     genReqId: () => randomUUID(),
-    bodyLimit: 1024 * 1024,
+    bodyLimit: REQUEST_BODY_MAX_BYTES,
   });
 }
 

@@ -14,3 +14,4 @@ export * from './fermentation/bulk/index.js';
 export * from './fermentation/formula/index.js';
 export * from './fermentation/units/index.js';
 export * from './contracts/culture-summary.js';
+export * from './contracts/logbook-transfer.js';

@@ -4,9 +4,9 @@ import type { FastifyReply } from 'fastify';
 import type { AccountRecord } from '../account/account.repository.js';
 import { CurrentAccount } from '../common/auth.decorators.js';
 import { IdParam } from '../common/id-param.js';
-import { CSV_COLUMNS } from './csv-columns.js';
+import { CSV_COLUMNS, type AccountExport, type ImportResult } from '@peakwise/shared';
 import { ImportFeedingsDto, ImportResultView } from './dto/import.dto.js';
-import { LogbookTransferService, type AccountExport, type ImportResult } from './logbook-transfer.service.js';
+import { LogbookTransferService } from './logbook-transfer.service.js';
 
 /** The signed-in baker's logbook out as files, and feedings back in from a CSV. */
 @ApiTags('import-export')

@@ -1,5 +1,19 @@
 import { BadRequestException, Injectable } from '@nestjs/common';
-import type { Account, Culture, Feeding, FieldError, RiseCheck, TemperatureReading } from '@peakwise/shared';
+import {
+  CHECK_COLUMNS,
+  CSV_COLUMNS,
+  IMPORT_MAX_ROWS,
+  OBSERVATION_SEPARATOR,
+  PREVIEW_ROWS,
+  REQUIRED_COLUMNS,
+  type AccountExport,
+  type CsvColumn,
+  type CsvRow,
+  type FieldError,
+  type ImportError,
+  type ImportRequest,
+  type ImportResult,
+} from '@peakwise/shared';
 import { plainToInstance } from 'class-transformer';
 import { validateSync, type ValidationError } from 'class-validator';
 import Papa from 'papaparse';
@@ -12,49 +26,8 @@ import { toFeeding } from '../feeding/feeding.mapper.js';
 import { CreateRiseCheckDto } from '../rise-check/dto/rise-check.dto.js';
 import { toRiseCheck } from '../rise-check/rise-check.mapper.js';
 import { toTemperatureReading } from '../temperature/temperature.mapper.js';
-import {
-  CHECK_COLUMNS,
-  CSV_COLUMNS,
-  IMPORT_MAX_ROWS,
-  OBSERVATION_SEPARATOR,
-  PREVIEW_ROWS,
-  REQUIRED_COLUMNS,
-  csvFileName,
-  type CsvColumn,
-  type CsvRow,
-} from './csv-columns.js';
+import { csvFileName } from './csv-columns.js';
 import { LogbookTransferRepository, type ImportFeeding } from './logbook-transfer.repository.js';
-
-export interface AccountExport {
-  format: 'peakwise-export';
-  version: 1;
-  exportedAt: string;
-  account: Account;
-  cultures: Culture[];
-  feedings: Feeding[];
-  riseChecks: RiseCheck[];
-  temperatureReadings: TemperatureReading[];
-}
-
-export interface ImportRequest {
-  csv: string;
-  mapping?: Record<string, string>;
-  dryRun?: boolean;
-}
-
-export interface ImportError {
-  line: number;
-  field: string;
-  message: string;
-}
-
-export interface ImportResult {
-  dryRun: boolean;
-  feedings: { new: number; duplicate: number };
-  riseChecks: { new: number; duplicate: number };
-  errors: ImportError[];
-  preview: CsvRow[];
-}
 
 /** At most this many row errors are reported; the rest would only repeat them. */
 const MAX_REPORTED_ERRORS = 200;

@@ -1,6 +1,6 @@
 import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
 import { IsBoolean, IsObject, IsOptional, IsString } from 'class-validator';
-import { CSV_COLUMNS } from '../csv-columns.js';
+import { CSV_COLUMNS } from '@peakwise/shared';
 
 export class ImportFeedingsDto {
   @ApiProperty({ description: 'The CSV file as text, with a header row' })
