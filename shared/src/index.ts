@@ -15,3 +15,4 @@ export * from './fermentation/formula/index.js';
 export * from './fermentation/units/index.js';
 export * from './contracts/culture-summary.js';
 export * from './contracts/logbook-transfer.js';
+export * from './contracts/formula.js';
