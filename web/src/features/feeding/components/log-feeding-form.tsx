@@ -14,21 +14,14 @@ import { heightUnit } from '@/lib/format/units';
 import { mapServerErrors } from '@/lib/form-errors';
 import { useIdempotencyKey } from '@/lib/idempotency';
 import { useCreateFeeding } from '../api/create-feeding';
-import { defaultsFrom, gramsText, toFeedingRequest, type FeedingFormValues } from '../utils/feeding-form';
+import {
+  defaultsFrom,
+  FEEDING_FIELD_OF,
+  gramsText,
+  toFeedingRequest,
+  type FeedingFormValues,
+} from '@/lib/logbook/feeding-form';
 import { RatioField } from './ratio-field';
-
-// The API's field names mapped to this form's (temperatures and heights are typed in the baker's unit).
-const FIELD_OF: Record<string, keyof FeedingFormValues> = {
-  starterG: 'starterG',
-  flourG: 'flourG',
-  waterG: 'waterG',
-  flour: 'flour',
-  fedAt: 'fedAt',
-  temperatureC: 'temperature',
-  initialHeightMm: 'initialHeight',
-  notes: 'notes',
-  observations: 'observations',
-};
 
 const unit = (u: string) => ({ input: { endAdornment: <InputAdornment position="end">{u}</InputAdornment> } });
 const decimal = { inputMode: 'decimal' as const };
@@ -71,9 +64,9 @@ export function LogFeedingForm({ culture, last, account, onSaved }: LogFeedingFo
       onSaved(feeding);
     } catch (error) {
       idempotency.settle(error);
-      const { fieldErrors, formMessage } = mapServerErrors(error, Object.keys(FIELD_OF));
+      const { fieldErrors, formMessage } = mapServerErrors(error, Object.keys(FEEDING_FIELD_OF));
       fieldErrors.forEach(({ field, message }, index) => {
-        const name = FIELD_OF[field];
+        const name = FEEDING_FIELD_OF[field];
         if (name) setError(name, { type: 'server', message }, { shouldFocus: index === 0 });
       });
       if (formMessage !== null) setError('root.server', { type: 'server', message: formMessage });

@@ -1,6 +1,6 @@
 import ToggleButton from '@mui/material/ToggleButton';
 import ToggleButtonGroup from '@mui/material/ToggleButtonGroup';
-import { RATIO_PRESETS, type RatioChoice } from '../utils/feeding-form';
+import { RATIO_PRESETS, type RatioChoice } from '@/lib/logbook/feeding-form';
 import { bigToggleSx } from '@/components/logbook/toggle-sx';
 
 /** Big preset buttons: starter : flour : water. */

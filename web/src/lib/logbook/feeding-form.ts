@@ -5,8 +5,15 @@ import {
   type Culture,
   type Feeding,
   type FeedingObservation,
+  type UpdateFeedingRequest,
 } from '@peakwise/shared';
-import { heightFromInput, parseNumber, temperatureFromInput, temperatureToInput } from '@/lib/format/units';
+import {
+  heightFromInput,
+  heightToInput,
+  parseNumber,
+  temperatureFromInput,
+  temperatureToInput,
+} from '@/lib/format/units';
 import { toLocalInput } from '@/lib/format/local-input';
 
 export const RATIO_PRESETS = ['1:1:1', '1:2:2', '1:5:5'] as const;
@@ -27,6 +34,21 @@ export interface FeedingFormValues {
   observations: FeedingObservation[];
   notes: string;
 }
+
+// The feeding form, shared by Log feeding (a new feeding) and the feeding page (correcting one).
+
+/** The API's field names mapped to the form's (temperatures and heights are typed in the baker's unit). */
+export const FEEDING_FIELD_OF: Record<string, keyof FeedingFormValues> = {
+  starterG: 'starterG',
+  flourG: 'flourG',
+  waterG: 'waterG',
+  flour: 'flour',
+  fedAt: 'fedAt',
+  temperatureC: 'temperature',
+  initialHeightMm: 'initialHeight',
+  notes: 'notes',
+  observations: 'observations',
+};
 
 /** The preset a feeding's grams match (within 2 %), else custom. */
 export function presetOf(feeding: Pick<Feeding, 'starterG' | 'flourG' | 'waterG'>): RatioChoice {
@@ -100,4 +122,43 @@ export function gramsText(
   const grams = total === null ? null : gramsFromRatio(ratio, total);
   if (!grams) return null;
   return { starterG: String(grams.starterG), flourG: String(grams.flourG), waterG: String(grams.waterG) };
+}
+
+/** A recorded feeding as the form shows it, to correct: its own time, amounts and words, in the baker's units. */
+export function valuesFromFeeding(
+  feeding: Feeding,
+  account: Pick<Account, 'unitSystem' | 'temperatureUnit'>,
+): FeedingFormValues {
+  return {
+    ratio: presetOf(feeding),
+    totalG: text(Math.round((feeding.starterG + feeding.flourG + feeding.waterG) * 10) / 10),
+    starterG: text(feeding.starterG),
+    flourG: text(feeding.flourG),
+    waterG: text(feeding.waterG),
+    flour: feeding.flour ?? '',
+    fedAt: toLocalInput(new Date(feeding.fedAt)),
+    temperature:
+      feeding.temperatureC === null ? '' : text(temperatureToInput(feeding.temperatureC, account.temperatureUnit)),
+    initialHeight:
+      feeding.initialHeightMm === null ? '' : text(heightToInput(feeding.initialHeightMm, account.unitSystem)),
+    observations: [...feeding.observations],
+    notes: feeding.notes ?? '',
+  };
+}
+
+/**
+ * Only what the baker changed, for PATCH. A field left alone is not sent back, so a value shown
+ * rounded (75.2 °F for 24.01 °C, the time to the minute) is never overwritten by its rounding.
+ */
+export function feedingChanges(
+  values: FeedingFormValues,
+  recorded: FeedingFormValues,
+  account: Pick<Account, 'unitSystem' | 'temperatureUnit'>,
+): UpdateFeedingRequest {
+  const next = toFeedingRequest(values, account, values.fedAt !== recorded.fedAt);
+  const before = toFeedingRequest(recorded, account, false);
+  const changed = Object.entries(next).filter(
+    ([key, value]) => JSON.stringify(value) !== JSON.stringify(before[key as keyof UpdateFeedingRequest]),
+  );
+  return Object.fromEntries(changed);
 }
