@@ -50,6 +50,10 @@ function createAppRouter() {
                   lazy: async () => ({ Component: (await import('./routes/log-feeding')).LogFeedingRoute }),
                 },
                 {
+                  path: 'cultures/:id/import',
+                  lazy: async () => ({ Component: (await import('./routes/import-feedings')).ImportFeedingsRoute }),
+                },
+                {
                   path: 'cultures/:id/rise-check',
                   lazy: async () => ({ Component: (await import('./routes/rise-check')).RiseCheckRoute }),
                 },

@@ -4,6 +4,7 @@ import Typography from '@mui/material/Typography';
 import { Page } from '@/components/layout/page';
 import { ChangePasswordForm } from '@/features/account/components/change-password-form';
 import { ProfileForm } from '@/features/account/components/profile-form';
+import { AccountExportCard } from '@/features/transfer/components/account-export-card';
 import { useSignedInAccount } from '@/lib/auth/use-signed-in-account';
 
 export function AccountRoute() {
@@ -30,6 +31,7 @@ export function AccountRoute() {
           <ChangePasswordForm email={account.email} />
         </CardContent>
       </Card>
+      <AccountExportCard />
     </Page>
   );
 }

@@ -3,6 +3,7 @@ import { LoadError } from '@/components/feedback/load-error';
 import { PageLoader } from '@/components/feedback/page-loader';
 import { Page } from '@/components/layout/page';
 import { useSignedInAccount } from '@/lib/auth/use-signed-in-account';
+import { CultureFilesCard } from '@/features/transfer/components/culture-files-card';
 import { useCulture } from '@/lib/logbook/get-culture';
 import { useCultureSummary } from '@/lib/logbook/get-culture-summary';
 import { useNow } from '@/lib/use-now';
@@ -53,6 +54,7 @@ export function CulturePage({ cultureId }: { cultureId: string }) {
       {summary.data && <KineticsCard kinetics={summary.data.kinetics} unit={account.temperatureUnit} />}
       <FeedingsTable cultureId={cultureId} account={account} />
       <LineageCard culture={c} />
+      <CultureFilesCard cultureId={cultureId} />
     </Page>
   );
 }
