@@ -58,6 +58,10 @@ function createAppRouter() {
                   lazy: async () => ({ Component: (await import('./routes/rise-check')).RiseCheckRoute }),
                 },
                 {
+                  path: 'feedings/:id',
+                  lazy: async () => ({ Component: (await import('./routes/feeding')).FeedingRoute }),
+                },
+                {
                   path: 'account',
                   lazy: async () => ({
                     Component: (await import('./routes/account')).AccountRoute,

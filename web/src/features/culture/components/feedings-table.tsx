@@ -1,5 +1,6 @@
 import type { Account, SortOrder } from '@peakwise/shared';
 import Box from '@mui/material/Box';
+import Link from '@mui/material/Link';
 import Card from '@mui/material/Card';
 import CardContent from '@mui/material/CardContent';
 import Table from '@mui/material/Table';
@@ -11,7 +12,8 @@ import TablePagination from '@mui/material/TablePagination';
 import TableRow from '@mui/material/TableRow';
 import TableSortLabel from '@mui/material/TableSortLabel';
 import Typography from '@mui/material/Typography';
-import { useState } from 'react';
+import { useState, type MouseEvent } from 'react';
+import { Link as RouterLink, useNavigate } from 'react-router-dom';
 import { formatTemperature } from '@peakwise/shared';
 import { LoadError } from '@/components/feedback/load-error';
 import { formatHeight, formatWeights } from '@/lib/format/units';
@@ -26,6 +28,12 @@ export function FeedingsTable({ cultureId, account }: { cultureId: string; accou
   const [page, setPage] = useState(0);
   const [rowsPerPage, setRowsPerPage] = useState(10);
   const feedings = useFeedings(cultureId, { order, limit: rowsPerPage, offset: page * rowsPerPage });
+  const navigate = useNavigate();
+  // The whole row is a thumb-sized target; the date stays a real link for keyboards and screen readers.
+  const openRow = (id: string) => (event: MouseEvent) => {
+    if ((event.target as HTMLElement).closest('a')) return;
+    void navigate(`/feedings/${id}`);
+  };
 
   return (
     <Card>
@@ -33,6 +41,11 @@ export function FeedingsTable({ cultureId, account }: { cultureId: string; accou
         <Typography variant="h2" gutterBottom>
           Feedings
         </Typography>
+        {feedings.data && feedings.data.total > 0 && (
+          <Typography variant="body2" color="text.secondary" sx={{ mb: 1 }}>
+            Open a feeding to correct it, its rise checks or its temperatures.
+          </Typography>
+        )}
         {feedings.isError && <LoadError error={feedings.error} onRetry={() => void feedings.refetch()} />}
         {feedings.data && feedings.data.total === 0 && <Typography color="text.secondary">No feedings yet.</Typography>}
         {feedings.data && feedings.data.total > 0 && (
@@ -67,8 +80,12 @@ export function FeedingsTable({ cultureId, account }: { cultureId: string; accou
                 </TableHead>
                 <TableBody>
                   {feedings.data.items.map((f) => (
-                    <TableRow key={f.id}>
-                      <TableCell>{when(f.fedAt, account.timeZone)}</TableCell>
+                    <TableRow key={f.id} hover onClick={openRow(f.id)} sx={{ cursor: 'pointer' }}>
+                      <TableCell>
+                        <Link component={RouterLink} to={`/feedings/${f.id}`} underline="hover">
+                          {when(f.fedAt, account.timeZone)}
+                        </Link>
+                      </TableCell>
                       <TableCell align="right">
                         {formatWeights([f.starterG, f.flourG, f.waterG], account.unitSystem)}
                       </TableCell>
