@@ -1,5 +1,6 @@
 import { CSV_COLUMNS, REQUIRED_COLUMNS, type CsvColumn, type CsvRow, type ImportRequest } from '@peakwise/shared';
 import { fieldError } from '../common/validation.js';
+import { unescapeFormula } from './csv-formula-escape.js';
 
 /** Our column → the header of the file to read it from. */
 export type ColumnHeaders = Record<CsvColumn, string>;
@@ -32,7 +33,10 @@ export function requireColumns(fields: string[], headers: ColumnHeaders, mapping
   }
 }
 
-/** One record of the file by our column names; a column the file lacks reads as empty. */
+/**
+ * One record of the file by our column names, cells unescaped as the export escaped them (so the
+ * preview shows what will be written); a column the file lacks reads as empty.
+ */
 export function toCsvRow(cells: Record<string, string>, headers: ColumnHeaders): CsvRow {
-  return Object.fromEntries(CSV_COLUMNS.map((c) => [c, cells[headers[c]] ?? ''])) as CsvRow;
+  return Object.fromEntries(CSV_COLUMNS.map((c) => [c, unescapeFormula(cells[headers[c]] ?? '')])) as CsvRow;
 }

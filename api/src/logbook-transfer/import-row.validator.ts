@@ -3,6 +3,7 @@ import { plainToInstance } from 'class-transformer';
 import { validateSync, type ValidationError } from 'class-validator';
 import { CreateFeedingDto } from '../feeding/dto/feeding.dto.js';
 import { CreateRiseCheckDto } from '../rise-check/dto/rise-check.dto.js';
+import { PLAIN_NUMBER } from './csv-formula-escape.js';
 import type { ImportFeeding } from './logbook-transfer.repository.js';
 
 /** A row's feeding, ready to write; fedAt is required, so a row without it never gets this far. */
@@ -39,13 +40,11 @@ const CHECK_FIELDS: Record<string, CsvColumn> = {
   temperatureC: 'check_temperature_c',
 };
 
-const NUMBER = /^[+-]?(?:\d+\.?\d*|\.\d+)(?:[eE][+-]?\d+)?$/;
-
 /** A cell as the JSON API would receive it: empty → left out, numbers → numbers, else as text. */
 function numberCell(value: string): number | string | undefined {
   const trimmed = value.trim();
   if (trimmed === '') return undefined;
-  return NUMBER.test(trimmed) ? Number(trimmed) : trimmed;
+  return PLAIN_NUMBER.test(trimmed) ? Number(trimmed) : trimmed;
 }
 const textCell = (value: string): string | undefined => (value.trim() === '' ? undefined : value);
 
