@@ -13,8 +13,8 @@
 // - Import: a cell that begins with a quote followed by a trigger character or another quote loses
 //   that first quote, and nothing else changes. A quote followed by anything else is the text's own
 //   ("'tis ripe", "'97 rye") and stays. In a third-party file, "'-3" therefore reads as -3 and
-//   "'=A1" as the text "=A1", which is how the spreadsheet that wrote them meant them; a cell
-//   beginning with two quotes loses one.
+//   "'=A1" as the text "=A1", as a program escaping the same common way meant them; a cell
+//   beginning with two quotes loses one (rare, and the price of a lossless round trip).
 //
 // Papa's own escapeFormulae is not used: it leaves a cell's own leading quote alone, so the import
 // could not tell the text "'=x" from an escaped "=x", and the round trip would lose a quote.
