@@ -10,6 +10,7 @@ import type { AppConfig } from './config.js';
 import { DatabaseModule } from './db/database.module.js';
 import type { DatabaseHandle } from './db/database.js';
 import { FeedingModule } from './feeding/feeding.module.js';
+import { FormulaModule } from './formula/formula.module.js';
 import { HealthModule } from './health/health.module.js';
 import { LogbookTransferModule } from './logbook-transfer/logbook-transfer.module.js';
 import { RiseCheckModule } from './rise-check/rise-check.module.js';
@@ -32,6 +33,7 @@ export class AppModule {
         RiseCheckModule,
         TemperatureModule,
         LogbookTransferModule,
+        FormulaModule,
       ],
       providers: [{ provide: APP_GUARD, useClass: SessionGuard }],
     };

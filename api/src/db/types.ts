@@ -68,6 +68,40 @@ export interface Feeding {
   waterTemperatureC: number | null;
 }
 
+export interface Formula {
+  accountId: string;
+  createdAt: Generated<Timestamp>;
+  id: Generated<string>;
+  name: string;
+  notes: string | null;
+  scaleBy: string | null;
+  scaleDoughG: number | null;
+  scaleFactor: number | null;
+  scaleLossPct: number | null;
+  scalePieceG: number | null;
+  scalePieces: number | null;
+  updatedAt: Generated<Timestamp>;
+}
+
+export interface FormulaBlendFlour {
+  formulaId: string;
+  name: string;
+  parts: number;
+  position: number;
+}
+
+export interface FormulaIngredient {
+  amount: number;
+  food: string | null;
+  formulaId: string;
+  gramsPerMl: number | null;
+  kind: string;
+  name: string;
+  position: number;
+  starterHydrationPct: number | null;
+  unit: string;
+}
+
 export interface IdempotencyKey {
   accountId: string;
   completedAt: Timestamp | null;
@@ -114,6 +148,9 @@ export interface DB {
   account: Account;
   culture: Culture;
   feeding: Feeding;
+  formula: Formula;
+  formulaBlendFlour: FormulaBlendFlour;
+  formulaIngredient: FormulaIngredient;
   idempotencyKey: IdempotencyKey;
   riseCheck: RiseCheck;
   schemaMigration: SchemaMigration;
