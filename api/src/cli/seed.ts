@@ -10,6 +10,7 @@ import { AccountService } from '../account/account.service.js';
 import { PasswordService } from '../auth/password.service.js';
 import type { AppConfig } from '../config.js';
 import { openDatabase } from '../db/database.js';
+import { seedDemoFormulas } from './demo-formulas.js';
 import { seedDemoLogbook } from './demo-logbook.js';
 
 // The invented Larkspur Community Kitchen and its "Weekend Levain" class.
@@ -45,6 +46,7 @@ try {
     }
     const feedings = await seedDemoLogbook(db, accountIds, new Date());
     process.stdout.write(`seeded ${feedings} demo feedings with their rise checks\n`);
+    process.stdout.write(`seeded ${await seedDemoFormulas(db, accountIds)} demo formulas\n`);
     const dataDir = process.env.PEAKWISE_DATA_DIR;
     if (dataDir) {
       mkdirSync(dataDir, { recursive: true });
