@@ -34,7 +34,9 @@ export function ColumnMappingFields({ headers, mapping, onChange, missing }: Col
         value={mapping[column]}
         onChange={(e) => onChange(column, e.target.value)}
         error={isMissing}
-        helperText={isMissing ? 'Choose the column of your file that holds this.' : COLUMN_INFO[column].hint}
+        helperText={
+          isMissing ? 'Choose the column of your file that holds this.' : COLUMN_INFO[column].hint || undefined
+        }
         slotProps={{ select: { native: true }, inputLabel: { shrink: true }, htmlInput: { name: column } }}
       >
         <option value="">{required ? '— choose a column —' : '— not in this file —'}</option>

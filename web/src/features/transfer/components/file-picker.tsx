@@ -1,5 +1,6 @@
 import UploadFileOutlined from '@mui/icons-material/UploadFileOutlined';
 import Alert from '@mui/material/Alert';
+import Box from '@mui/material/Box';
 import Button from '@mui/material/Button';
 import Stack from '@mui/material/Stack';
 import Typography from '@mui/material/Typography';
@@ -19,7 +20,7 @@ export interface PickedFile {
 async function readPicked(file: File): Promise<PickedFile> {
   if (file.size > REQUEST_BODY_MAX_BYTES) {
     throw new Error(
-      `“${file.name}” is ${sizeText(file.size)}; Peakwise takes files up to ${SIZE_LIMIT_TEXT}. ` +
+      `“${file.name}” is ${sizeText(file.size, 'up')}, over the ${SIZE_LIMIT_TEXT} Peakwise takes at once. ` +
         'Split it by date into smaller files and import them one after another.',
     );
   }
@@ -65,20 +66,35 @@ export function FilePicker({ picked, onPicked, onPicking }: FilePickerProps) {
 
   return (
     <Stack spacing={1.5}>
+      {/* A label around the input opens the phone's file chooser; the input stays focusable for keyboards. */}
       <Button
         component="label"
+        role={undefined}
+        tabIndex={-1}
         variant={picked ? 'outlined' : 'contained'}
         size="large"
         startIcon={<UploadFileOutlined />}
-        sx={{ minHeight: 56, alignSelf: { xs: 'stretch', sm: 'start' } }}
+        sx={{
+          minHeight: 56,
+          alignSelf: { xs: 'stretch', sm: 'start' },
+          '&:has(input:focus-visible)': { outline: 3, outlineOffset: 2, outlineColor: 'secondary.main' },
+        }}
       >
         {picked ? 'Choose another file' : 'Choose a CSV file'}
-        <input
-          hidden
+        <Box
+          component="input"
           type="file"
-          accept=".csv,text/csv,text/plain"
+          accept=".csv,text/csv,text/comma-separated-values,application/vnd.ms-excel,text/plain"
           data-testid="csv-file"
-          onChange={(e) => void onChange(e)}
+          onChange={(e: ChangeEvent<HTMLInputElement>) => void onChange(e)}
+          sx={{
+            position: 'absolute',
+            width: '1px',
+            height: '1px',
+            opacity: 0,
+            overflow: 'hidden',
+            clip: 'rect(0 0 0 0)',
+          }}
         />
       </Button>
       {picked && !error && (

@@ -7,9 +7,9 @@ export const COLUMN_INFO: Record<CsvColumn, { label: string; short: string; hint
   flour_g: { label: 'Flour (g)', short: 'Flour g', hint: 'Grams of flour added' },
   water_g: { label: 'Water (g)', short: 'Water g', hint: 'Grams of water added' },
   flour: { label: 'Flour or blend', short: 'Flour', hint: 'Its name, e.g. whole rye' },
-  temperature_c: { label: 'Room or jar temperature (°C)', short: 'Temp. °C', hint: 'In °C' },
-  water_temperature_c: { label: 'Water temperature (°C)', short: 'Water °C', hint: 'In °C' },
-  initial_height_mm: { label: 'Height after feeding (mm)', short: 'Height mm', hint: 'From the jar’s base, in mm' },
+  temperature_c: { label: 'Room or jar temperature (°C)', short: 'Temp. °C', hint: 'Where the jar stood' },
+  water_temperature_c: { label: 'Water temperature (°C)', short: 'Water °C', hint: '' },
+  initial_height_mm: { label: 'Height after feeding (mm)', short: 'Height mm', hint: 'From the jar’s base' },
   observations: {
     label: 'What you noticed',
     short: 'Noticed',
@@ -17,8 +17,8 @@ export const COLUMN_INFO: Record<CsvColumn, { label: string; short: string; hint
   },
   notes: { label: 'Notes', short: 'Notes', hint: 'Any text' },
   check_taken_at: { label: 'Rise check: taken at', short: 'Checked at', hint: 'Date and time with a time zone' },
-  check_height_mm: { label: 'Rise check: height (mm)', short: 'Check mm', hint: 'From the jar’s base, in mm' },
-  check_temperature_c: { label: 'Rise check: temperature (°C)', short: 'Check °C', hint: 'In °C' },
+  check_height_mm: { label: 'Rise check: height (mm)', short: 'Check mm', hint: 'From the jar’s base' },
+  check_temperature_c: { label: 'Rise check: temperature (°C)', short: 'Check °C', hint: '' },
 };
 
 /** Our column's label, or the field as the server named it ("row", "file"). */

@@ -49,5 +49,6 @@ describe('import words', () => {
     expect(sizeText(1024 * 1024)).toBe('1 MB');
     expect(sizeText(2_500_000)).toBe('2.4 MB');
     expect(sizeText(300)).toBe('1 KB');
+    expect(sizeText(1024 * 1024 + 1, 'up')).toBe('1.1 MB');
   });
 });

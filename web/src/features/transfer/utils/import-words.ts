@@ -6,10 +6,14 @@ const plural = (n: number, one: string, many: string) => `${n} ${n === 1 ? one :
 export const feedingsText = (n: number) => plural(n, 'feeding', 'feedings');
 export const checksText = (n: number) => plural(n, 'rise check', 'rise checks');
 
-/** "1 MB" (binary, as the server counts its limit). */
-export function sizeText(bytes: number): string {
-  if (bytes >= 1024 * 1024) return `${Math.round((bytes / (1024 * 1024)) * 10) / 10} MB`;
-  return `${Math.max(1, Math.round(bytes / 1024))} KB`;
+/**
+ * "1.5 MB" (binary, as the server counts its limit). Rounded up for a file over the limit, so a
+ * file just over 1 MB never reads as "1 MB".
+ */
+export function sizeText(bytes: number, rounding: 'nearest' | 'up' = 'nearest'): string {
+  const round = rounding === 'up' ? Math.ceil : Math.round;
+  if (bytes >= 1024 * 1024) return `${round((bytes / (1024 * 1024)) * 10) / 10} MB`;
+  return `${Math.max(1, round(bytes / 1024))} KB`;
 }
 
 export const SIZE_LIMIT_TEXT = sizeText(REQUEST_BODY_MAX_BYTES);
