@@ -4,7 +4,7 @@ import DialogActions from '@mui/material/DialogActions';
 import DialogContent from '@mui/material/DialogContent';
 import DialogContentText from '@mui/material/DialogContentText';
 import DialogTitle from '@mui/material/DialogTitle';
-import { useState, type ReactNode } from 'react';
+import { useId, useState, type ReactNode } from 'react';
 import { FormAlert } from '@/components/form/form-alert';
 import { isApiError } from '@/lib/api-client';
 
@@ -19,6 +19,7 @@ interface ConfirmDialogProps {
 
 /** "Are you sure?" for a deletion: says what goes, waits for the server, shows its refusal. */
 export function ConfirmDialog({ open, title, children, confirmLabel, onConfirm, onClose }: ConfirmDialogProps) {
+  const titleId = useId();
   const [pending, setPending] = useState(false);
   const [error, setError] = useState<string>();
 
@@ -41,8 +42,8 @@ export function ConfirmDialog({ open, title, children, confirmLabel, onConfirm, 
   };
 
   return (
-    <Dialog open={open} onClose={close} fullWidth maxWidth="xs" aria-labelledby="confirm-title">
-      <DialogTitle id="confirm-title">{title}</DialogTitle>
+    <Dialog open={open} onClose={close} fullWidth maxWidth="xs" aria-labelledby={titleId}>
+      <DialogTitle id={titleId}>{title}</DialogTitle>
       <DialogContent>
         <DialogContentText component="div">{children}</DialogContentText>
         <FormAlert message={error} />

@@ -38,11 +38,12 @@ const gramsRules = {
 interface EditFeedingFormProps {
   feeding: Feeding;
   account: Account;
-  onDone: () => void;
+  onSaved: () => void;
+  onCancel: () => void;
 }
 
 /** The recorded feeding in the Log feeding form's fields; saving sends only what changed. */
-export function EditFeedingForm({ feeding, account, onDone }: EditFeedingFormProps) {
+export function EditFeedingForm({ feeding, account, onSaved, onCancel }: EditFeedingFormProps) {
   const update = useUpdateFeeding(feeding.id);
   const [recorded] = useState(() => valuesFromFeeding(feeding, account));
   const { control, handleSubmit, setError, formState } = useForm<FeedingFormValues>({ defaultValues: recorded });
@@ -57,10 +58,10 @@ export function EditFeedingForm({ feeding, account, onDone }: EditFeedingFormPro
 
   const onSubmit = handleSubmit(async (values) => {
     const changes = feedingChanges(values, recorded, account);
-    if (Object.keys(changes).length === 0) return onDone();
+    if (Object.keys(changes).length === 0) return onCancel();
     try {
       await update.mutateAsync(changes);
-      onDone();
+      onSaved();
     } catch (error) {
       const { fieldErrors, formMessage } = mapServerErrors(error, Object.keys(FEEDING_FIELD_OF));
       fieldErrors.forEach(({ field, message }, index) => {
@@ -135,7 +136,7 @@ export function EditFeedingForm({ feeding, account, onDone }: EditFeedingFormPro
         <Button type="submit" variant="contained" size="large" loading={formState.isSubmitting} sx={{ flex: 1 }}>
           Save changes
         </Button>
-        <Button size="large" onClick={onDone} disabled={formState.isSubmitting}>
+        <Button size="large" onClick={onCancel} disabled={formState.isSubmitting}>
           Cancel
         </Button>
       </Stack>

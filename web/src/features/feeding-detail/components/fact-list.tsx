@@ -7,7 +7,13 @@ export function FactList({ facts }: { facts: { label: string; value: ReactNode }
   return (
     <Box
       component="dl"
-      sx={{ display: 'grid', gridTemplateColumns: 'minmax(7rem, 40%) 1fr', columnGap: 2, rowGap: 1.25, m: 0 }}
+      sx={{
+        display: 'grid',
+        gridTemplateColumns: { xs: 'minmax(7rem, 40%) 1fr', sm: '14rem 1fr' },
+        columnGap: 2,
+        rowGap: 1.25,
+        m: 0,
+      }}
     >
       {facts.map(({ label, value }) => (
         <Box key={label} sx={{ display: 'contents' }}>

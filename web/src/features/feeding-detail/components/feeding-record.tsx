@@ -11,11 +11,19 @@ const NONE = '—';
 /** The feeding as it was logged, in the baker's units, with the caution a discoloured jar calls for. */
 export function FeedingRecord({ feeding: f, account }: { feeding: Feeding; account: Account }) {
   const temperature = (c: number | null) => (c === null ? NONE : formatTemperature(c, account.temperatureUnit, 1));
+  const grams = [f.starterG, f.flourG, f.waterG];
   const facts = [
     { label: 'Fed at', value: formatWhen(f.fedAt, account.timeZone) },
     {
       label: 'Starter : flour : water',
-      value: `${formatWeights([f.starterG, f.flourG, f.waterG], account.unitSystem)}\nratio ${ratioWords(f)}`,
+      value: [
+        formatWeights(grams, account.unitSystem),
+        // The form takes grams in both unit systems, so a US baker sees the numbers they will edit.
+        account.unitSystem === 'us' ? `(${formatWeights(grams, 'metric')})` : null,
+        `ratio ${ratioWords(f)}`,
+      ]
+        .filter(Boolean)
+        .join('\n'),
     },
     { label: 'Feed hydration', value: `${feedHydrationWords(f)} water to flour` },
     { label: 'Flour', value: f.flour ?? NONE },

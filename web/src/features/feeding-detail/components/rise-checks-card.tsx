@@ -18,11 +18,10 @@ import { formatDuration } from '@/lib/format/duration';
 import { formatHeight } from '@/lib/format/units';
 import { riseChecksQueryOptions } from '@/lib/logbook/get-rise-checks';
 import { useDeleteRiseCheck } from '../api/delete-rise-check';
-import { readingTime, risePct } from '../utils/feeding-words';
+import { hoursAfter, readingTime, risePct } from '../utils/feeding-words';
 import { ConfirmDialog } from './confirm-dialog';
 import { RiseCheckDialog } from './rise-check-dialog';
 
-const hoursAfter = (fedAt: string, at: string) => (Date.parse(at) - Date.parse(fedAt)) / 3_600_000;
 const riseWords = (pct: number | null) => (pct === null ? '—' : `${pct > 0 ? '+' : ''}${pct} %`);
 const secondary = { display: 'block', color: 'text.secondary', fontSize: '0.8rem' } as const;
 

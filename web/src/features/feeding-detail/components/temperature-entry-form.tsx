@@ -56,12 +56,12 @@ export function TemperatureEntryForm({ feedingId, account }: { feedingId: string
       <Typography variant="h3" component="h3">
         Add a reading
       </Typography>
-      <Stack direction="row" spacing={1}>
+      <Stack direction={{ xs: 'column', sm: 'row' }} spacing={2}>
         <FormTextField
           control={control}
           name="temperature"
           label="Temperature"
-          sx={{ flex: 2 }}
+          sx={{ flex: 1 }}
           slotProps={{
             input: { endAdornment: <InputAdornment position="end">°{account.temperatureUnit}</InputAdornment> },
             htmlInput: { inputMode: 'decimal' },
@@ -72,7 +72,7 @@ export function TemperatureEntryForm({ feedingId, account }: { feedingId: string
           name="takenAt"
           label="Taken at"
           type="datetime-local"
-          sx={{ flex: 3 }}
+          sx={{ flex: 1 }}
           slotProps={{ inputLabel: { shrink: true } }}
         />
       </Stack>

@@ -12,11 +12,14 @@ import Typography from '@mui/material/Typography';
 import { useState } from 'react';
 import { LoadError } from '@/components/feedback/load-error';
 import { VisuallyHidden } from '@/components/visually-hidden';
+import { formatDuration } from '@/lib/format/duration';
 import { useDeleteTemperature } from '../api/delete-temperature';
 import { useTemperatures } from '../api/get-temperatures';
-import { readingTime } from '../utils/feeding-words';
+import { hoursAfter, readingTime } from '../utils/feeding-words';
 import { ConfirmDialog } from './confirm-dialog';
 import { TemperatureEntryForm } from './temperature-entry-form';
+
+const secondary = { display: 'block', color: 'text.secondary', fontSize: '0.8rem' } as const;
 
 /** The feeding's temperature readings (typed in by hand for now): list, add, remove. */
 export function TemperaturesCard({ feeding, account }: { feeding: Feeding; account: Account }) {
@@ -56,7 +59,12 @@ export function TemperaturesCard({ feeding, account }: { feeding: Feeding; accou
             <TableBody>
               {readings.data.items.map((r) => (
                 <TableRow key={r.id}>
-                  <TableCell>{time(r)}</TableCell>
+                  <TableCell>
+                    {time(r)}
+                    <Typography component="span" sx={secondary}>
+                      +{formatDuration(hoursAfter(feeding.fedAt, r.takenAt))}
+                    </Typography>
+                  </TableCell>
                   <TableCell align="right">{degrees(r)}</TableCell>
                   <TableCell align="right" sx={{ px: 0 }}>
                     <IconButton aria-label={`Delete reading at ${time(r)}`} onClick={() => setDeleting(r)}>

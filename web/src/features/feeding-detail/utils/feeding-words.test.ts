@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { feedHydrationWords, formatWhen, ratioWords, readingTime, risePct } from './feeding-words';
+import { feedHydrationWords, formatWhen, hoursAfter, ratioWords, readingTime, risePct } from './feeding-words';
 
 describe('words for one feeding', () => {
   it('states the ratio with the starter as 1', () => {
@@ -25,5 +25,9 @@ describe('words for one feeding', () => {
     expect(readingTime('2026-12-01T15:30:00Z', '2026-12-01T13:05:00Z', 'Europe/Berlin')).toBe('16:30');
     expect(readingTime('2026-12-01T23:30:00Z', '2026-12-01T13:05:00Z', 'Europe/Berlin')).toBe('2 Dec, 00:30');
     expect(readingTime('2026-12-01T23:30:00Z', '2026-12-01T13:05:00Z', 'UTC')).toBe('23:30');
+  });
+
+  it('measures a reading’s time from the feeding', () => {
+    expect(hoursAfter('2026-12-01T13:05:00Z', '2026-12-01T14:35:00Z')).toBe(1.5);
   });
 });

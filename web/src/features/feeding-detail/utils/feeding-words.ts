@@ -34,3 +34,8 @@ export function readingTime(iso: string, fedAtIso: string, timeZone: string): st
   if (day(iso) === day(fedAtIso)) return time;
   return `${new Date(iso).toLocaleDateString('en-GB', { timeZone, day: 'numeric', month: 'short' })}, ${time}`;
 }
+
+/** Hours from the feeding to a reading, for "+1 h 30 min". */
+export function hoursAfter(fedAtIso: string, iso: string): number {
+  return (Date.parse(iso) - Date.parse(fedAtIso)) / 3_600_000;
+}
