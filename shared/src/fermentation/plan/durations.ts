@@ -66,9 +66,10 @@ function estimateBulk(plan: ResolvedPlan, mixMs: number, run: BulkRun): BulkEsti
   if (run.doughC !== undefined && run.doughC !== null) {
     dough.temperatureC = run.doughC;
     delete dough.forecast;
-  } else if (run.temperatures?.length && dough.temperatureC !== undefined && !dough.forecast) {
-    // After the last logged reading the dough is assumed back at the planned temperature.
-    dough.forecast = [{ c: dough.temperatureC }];
+  } else if (run.temperatures?.length) {
+    // With logged readings the dough stays at the last one (the series holds it), unless the
+    // baker gave a forecast; the planned constant would otherwise override what was measured.
+    delete dough.temperatureC;
   }
   if (run.temperatures?.length) dough.temperatures = run.temperatures;
   if (run.readings?.length) dough.readings = run.readings;

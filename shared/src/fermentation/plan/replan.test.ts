@@ -1,0 +1,133 @@
+import { describe, expect, it } from 'vitest';
+import { predictBulkEnd } from '../bulk/bulk-end.js';
+import { addHours } from '../temperature/time.js';
+import { planBake } from './plan-bake.js';
+import { DOUGH, hours, input, ms, step } from './plan-test-helpers.js';
+import { replanBake } from './replan.js';
+import { type DoneStep, type PlanOption, type PlanStep } from './types.js';
+
+const plan = planBake(input());
+const sameDay = plan.options.find((o) => o.kind === 'same-day') as PlanOption;
+const timing =
+  sameDay.timing ??
+  (() => {
+    throw new Error('no timing');
+  })();
+const planned = (id: string): PlanStep => step(sameDay, id);
+const asPlanned = (...ids: string[]): DoneStep[] =>
+  ids.map((id) => ({ id, startedAt: planned(id).startAt, endedAt: planned(id).endAt }));
+const shift = (a: string, b: string): number => hours(a, b) * 60;
+
+describe('replanBake', () => {
+  it('with nothing new it reproduces the plan', () => {
+    const mix = planned('mix');
+    // Half an hour after mixing: the rest is running, the salt not yet due.
+    const live = replanBake(input(), timing, {
+      now: addHours(mix.startAt, 0.5),
+      done: asPlanned('feed-starter', 'mix'),
+    });
+    expect(live.steps.map((s) => [s.id, s.startAt, s.endAt])).toEqual(
+      sameDay.steps.map((s) => [s.id, s.startAt, s.endAt]),
+    );
+    expect(live.steps.filter((s) => s.done).map((s) => s.id)).toEqual(['feed-starter', 'starter-rise', 'mix']);
+    expect(live.bulk.status).toBe('fermenting');
+    expect(live.warnings).toEqual([]);
+  });
+
+  it('a mix checked off 20 min late moves every later step by 20 min; the cooling absorbs what it can', () => {
+    const mixAt = addHours(planned('mix').startAt, 1 / 3);
+    const live = replanBake(input(), timing, {
+      now: addHours(mixAt, 0.1),
+      done: [...asPlanned('feed-starter'), { id: 'mix', startedAt: mixAt }],
+    });
+    expect(step(live, 'mix').startAt).toBe(mixAt);
+    expect(step(live, 'feed-starter').startAt).toBe(planned('feed-starter').startAt);
+    for (const id of ['rest', 'add-salt', 'fold-1', 'fold-4', 'bulk-end', 'shape', 'proof', 'preheat', 'bake']) {
+      expect(shift(planned(id).startAt, step(live, id).startAt), id).toBeCloseTo(20, 1);
+    }
+    // Ready at the asked time if the loaf still gets its 60 min of cooling, else that much later.
+    const cooled = ms(step(live, 'bake').endAt) + 60 * 60_000;
+    expect(ms(step(live, 'cool').endAt)).toBe(Math.max(cooled, ms(plan.readyAt ?? '')));
+  });
+
+  it('after a late bulk (cooler dough, slow aliquot jar) the bulk end and all later steps move later', () => {
+    const mix = planned('mix').startAt;
+    const now = addHours(mix, 3);
+    const doughTemperatures = [
+      { at: mix, c: 24 },
+      { at: addHours(mix, 1.5), c: 21 },
+      { at: now, c: 20 },
+    ];
+    const aliquotReadings = [{ at: now, risePct: 4 }];
+    const done = asPlanned('feed-starter', 'mix', 'rest', 'add-salt', 'fold-1', 'fold-2', 'fold-3', 'fold-4');
+    const live = replanBake(input(), timing, { now, done, doughTemperatures, aliquotReadings });
+    // The oracle: predictBulkEnd on the same readings, the dough held at its last reading.
+    const e = predictBulkEnd(
+      { ...DOUGH, temperatureC: undefined, mixedAt: mix, temperatures: doughTemperatures, readings: aliquotReadings },
+      {},
+    );
+    expect(hours(mix, live.bulk.endAt ?? '')).toBeCloseTo(e.hoursFromMix ?? NaN, 3);
+    expect(live.bulk.rateScale).toBeLessThan(1);
+    expect(live.bulk.readingsUsed).toBe(1);
+    const delay = shift(planned('bulk-end').startAt, step(live, 'bulk-end').startAt);
+    expect(delay).toBeGreaterThan(60);
+    for (const id of ['shape', 'proof', 'preheat', 'bake', 'finish']) {
+      expect(shift(planned(id).startAt, step(live, id).startAt), id).toBeGreaterThanOrEqual(delay - 0.02);
+    }
+    // Done steps keep their actual times.
+    for (const d of done)
+      expect(step(live, d.id)).toMatchObject({ startAt: d.startedAt, endAt: d.endedAt, done: true });
+    // Ready later than asked: the re-plan says when.
+    expect(ms(live.readyAt ?? '')).toBeGreaterThan(ms(plan.readyAt ?? ''));
+  });
+
+  it('a jar past its target ends bulk at the crossing (status done)', () => {
+    const mix = planned('mix').startAt;
+    const live = replanBake(input(), timing, {
+      now: addHours(mix, 5),
+      done: asPlanned('feed-starter', 'mix', 'rest', 'add-salt', 'fold-1', 'fold-2', 'fold-3', 'fold-4'),
+      aliquotReadings: [
+        { at: addHours(mix, 4), risePct: 40 },
+        { at: addHours(mix, 5), risePct: 60 },
+      ],
+    });
+    expect(live.bulk.status).toBe('done');
+    expect(hours(mix, live.bulk.endAt ?? '')).toBeCloseTo(4.5, 3);
+    // The model's end is past, the shaping is not done: it is due now.
+    expect(step(live, 'bulk-end').startAt).toBe(addHours(mix, 5));
+  });
+
+  it('an overdue fold moves to now, and the next one follows at the interval', () => {
+    const fold2 = planned('fold-2');
+    const now = addHours(fold2.startAt, 0.25);
+    const live = replanBake(input(), timing, {
+      now,
+      done: asPlanned('feed-starter', 'mix', 'rest', 'add-salt', 'fold-1'),
+    });
+    expect(step(live, 'fold-2').startAt).toBe(now);
+    expect(hours(step(live, 'fold-2').startAt, step(live, 'fold-3').startAt)).toBeCloseTo(0.5, 9);
+  });
+
+  it('retard: a late shape keeps the bake while the fridge time allows, else moves it', () => {
+    const p = planBake(input({ readyAt: '2026-12-05T10:00:00+01:00', quietHours: { from: '23:00', until: '06:00' } }));
+    const retard = p.options.find((o) => o.kind === 'overnight-retard') as PlanOption;
+    const t =
+      retard.timing ??
+      (() => {
+        throw new Error('no timing');
+      })();
+    const shape = step(retard, 'shape');
+    const fridgeHours = hours(step(retard, 'retard').startAt, step(retard, 'retard').endAt);
+    const lateBy = (h: number) =>
+      replanBake(input({ readyAt: '2026-12-05T10:00:00+01:00', quietHours: { from: '23:00', until: '06:00' } }), t, {
+        now: addHours(shape.startAt, h),
+        done: [{ id: 'bulk-end', startedAt: addHours(shape.startAt, h) }],
+      });
+    const small = lateBy(0.25);
+    expect(step(small, 'bake').startAt).toBe(step(retard, 'bake').startAt);
+    const big = lateBy(fridgeHours - 8 + 1);
+    expect(hours(step(big, 'retard').startAt, step(big, 'retard').endAt)).toBeCloseTo(8, 6);
+    expect(ms(step(big, 'bake').startAt)).toBeGreaterThan(ms(step(retard, 'bake').startAt));
+    expect(big.warnings.join(' ')).toMatch(/8 h in the fridge/);
+  });
+});
