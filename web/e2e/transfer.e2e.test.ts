@@ -216,6 +216,8 @@ describe('import and export on a phone', () => {
     expect(all).toMatchObject({ format: 'peakwise-export', version: 1 });
     expect([all.cultures.length, all.feedings.length, all.riseChecks.length]).toEqual([1, 4, 4]);
     await page.getByText(/^Saved peakwise-export-.+: 1 culture, 4 feedings, 4 rise checks\.$/).waitFor();
+    await scrollToTop(page, page.getByRole('heading', { name: 'Your data' }));
+    await page.screenshot({ path: join(RESULTS_DIR, 'account-data.png') });
     await page.close();
   });
 });
