@@ -57,6 +57,14 @@ async function bakerWithFeeding(page: Page, base: string): Promise<{ cultureId: 
   return { cultureId, feeding };
 }
 
+/** Waits out the dialog's fade-in, so a screenshot shows it as the baker sees it. */
+async function dialogShown(page: Page): Promise<void> {
+  await page.waitForFunction(() => {
+    const dialog = document.querySelector('[role="dialog"]');
+    return dialog !== null && getComputedStyle(dialog.parentElement!).opacity === '1';
+  });
+}
+
 async function getJson<T>(page: Page, url: string): Promise<T> {
   const res = await page.request.get(url);
   expect(res.status()).toBe(200);
@@ -148,6 +156,8 @@ describe('correcting one feeding on a phone', () => {
     const dialog = page.getByRole('dialog', { name: 'Edit rise check' });
     expect(await dialog.getByLabel('Height from the jar’s base').inputValue()).toBe('1.77');
     await dialog.getByLabel('Height from the jar’s base').fill('2.5');
+    await dialogShown(page);
+    await page.screenshot({ path: join(RESULTS_DIR, 'rise-check-edit.png') });
     await dialog.getByRole('button', { name: 'Save rise check' }).click();
     await dialog.waitFor({ state: 'detached' });
     await checks.getByText('+56 %').waitFor();
@@ -177,10 +187,7 @@ describe('correcting one feeding on a phone', () => {
     await page.getByRole('button', { name: 'Delete feeding' }).click();
     const last = page.getByRole('dialog', { name: 'Delete this feeding?' });
     expect(await last.textContent()).toContain('its 1 rise check and its 2 temperature readings go with it');
-    await page.waitForFunction(() => {
-      const dialog = document.querySelector('[role="dialog"]');
-      return dialog !== null && getComputedStyle(dialog.parentElement!).opacity === '1';
-    });
+    await dialogShown(page);
     await page.screenshot({ path: join(RESULTS_DIR, 'feeding-delete.png') });
     await last.getByRole('button', { name: 'Delete feeding' }).click();
     await page.waitForURL(`${base}/cultures/${cultureId}`);

@@ -67,6 +67,7 @@ export function RiseCheckDialog({ check, feeding, account, onClose }: RiseCheckD
               control={control}
               name="height"
               label="Height from the jar’s base"
+              autoFocus
               helperText={
                 feeding.initialHeightMm === null
                   ? undefined
