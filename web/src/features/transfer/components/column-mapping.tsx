@@ -24,6 +24,8 @@ export function ColumnMappingFields({ headers, mapping, onChange, missing }: Col
   const field = (column: CsvColumn) => {
     const required = REQUIRED_COLUMNS.includes(column);
     const isMissing = missing.includes(column);
+    // The API reads a header spelled exactly like our column unless mapped elsewhere: say so.
+    const readByName = mapping[column] === '' && headers.includes(column);
     return (
       <TextField
         key={column}
@@ -35,7 +37,11 @@ export function ColumnMappingFields({ headers, mapping, onChange, missing }: Col
         onChange={(e) => onChange(column, e.target.value)}
         error={isMissing}
         helperText={
-          isMissing ? 'Choose the column of your file that holds this.' : COLUMN_INFO[column].hint || undefined
+          isMissing
+            ? 'Choose the column of your file that holds this.'
+            : readByName
+              ? `Your file’s “${column}” column is still read by its name; rename it in the file to leave it out.`
+              : COLUMN_INFO[column].hint || undefined
         }
         slotProps={{ select: { native: true }, inputLabel: { shrink: true }, htmlInput: { name: column } }}
       >
