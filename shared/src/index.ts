@@ -13,6 +13,8 @@ export * from './fermentation/kinetics/index.js';
 export * from './fermentation/bulk/index.js';
 export * from './fermentation/formula/index.js';
 export * from './fermentation/units/index.js';
+export * from './fermentation/plan/index.js';
 export * from './contracts/culture-summary.js';
 export * from './contracts/logbook-transfer.js';
 export * from './contracts/formula.js';
+export * from './contracts/bake-plan.js';

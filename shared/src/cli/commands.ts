@@ -20,6 +20,7 @@ import { fitCultureKinetics } from '../fermentation/kinetics/fit-kinetics.js';
 import { predictNextPeak } from '../fermentation/kinetics/predict.js';
 import type { ObservedFeeding } from '../fermentation/kinetics/types.js';
 import { readBulkInput, readNextFeeding, readPastFeeding } from './fermentation-input.js';
+import { planCommand } from './plan-command.js';
 import { InputError, array, each, object, optionalArray, type JsonObject } from './input.js';
 
 export type Command = (input: JsonObject) => unknown;
@@ -124,4 +125,5 @@ export const COMMANDS: Record<string, Command> = {
   blend: blendCommand,
   'predict-peak': predictPeakCommand,
   'bulk-end': bulkEndCommand,
+  plan: planCommand,
 };
