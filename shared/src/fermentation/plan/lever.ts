@@ -3,10 +3,12 @@
 // by bisection on the model itself (predictBulkEnd), within a sane range for dough (18–30 °C,
 // common practice) and below the culture's optimum, where time falls steadily with warmth.
 import { predictBulkEnd } from '../bulk/bulk-end.js';
+import { type AliquotReading, type BulkInput } from '../bulk/types.js';
 import { defaultKinetics } from '../kinetics/fit-kinetics.js';
 import { type CultureKinetics } from '../kinetics/types.js';
 import { relativeRate } from '../temperature/models.js';
-import { MS_PER_HOUR, formatInstant, parseInstant } from '../temperature/time.js';
+import { type TemperatureSample } from '../temperature/series.js';
+import { MS_PER_HOUR, formatInstant, parseInstant, parseMs } from '../temperature/time.js';
 import { BakersMathError } from '../units/bakers-math-error.js';
 import { DEFAULTS } from './defaults.js';
 import { type PlanDough } from './types.js';
@@ -21,6 +23,14 @@ export interface DoughTemperatureRequest {
   /** Range to search, °C; default 18–30 [common practice for dough]. */
   minC?: number;
   maxC?: number;
+  /**
+   * Live: the dough moves to the new spot at `changeAt` (default: at mixing). Before it, the
+   * logged `temperatures` (or the dough's planned temperature) apply, and `readings` from the
+   * aliquot jar set the dough's pace, as in predictBulkEnd.
+   */
+  changeAt?: string;
+  temperatures?: readonly TemperatureSample[];
+  readings?: readonly AliquotReading[];
 }
 
 export interface DoughTemperatureAnswer {
@@ -39,6 +49,22 @@ export function bulkHoursAt(dough: PlanDough, mixedAt: string, c: number, kineti
   const input = { ...dough, mixedAt, temperatureC: c };
   delete input.forecast;
   return predictBulkEnd(input, kinetics ? { kinetics } : {}).hoursFromMix ?? Infinity;
+}
+
+/** Bulk hours when the dough goes to `c` at `req.changeAt`, after what was logged before it. */
+export function bulkHoursAfterChange(req: DoughTemperatureRequest, c: number, kinetics: CultureKinetics): number {
+  if (!req.changeAt) return bulkHoursAt(req.dough, req.mixedAt, c, kinetics);
+  const input: BulkInput = { ...req.dough, mixedAt: req.mixedAt };
+  delete input.temperatureC;
+  const logged = req.temperatures?.length
+    ? req.temperatures
+    : [{ at: req.mixedAt, c: req.dough.temperatureC ?? req.dough.forecast?.[0]?.c ?? c }];
+  const lastMs = Math.max(...logged.map((t) => parseMs(t.at)));
+  const from = parseMs(req.changeAt) > lastMs ? req.changeAt : undefined;
+  input.temperatures = logged;
+  input.forecast = [{ c, ...(from ? { from } : {}) }];
+  if (req.readings?.length) input.readings = req.readings;
+  return predictBulkEnd(input, { kinetics }).hoursFromMix ?? Infinity;
 }
 
 /** Warmest temperature in [lo, hi] up to which the model's rate still rises (0.1 °C steps). */
@@ -63,13 +89,14 @@ export function doughTemperatureForBulkEnd(req: DoughTemperatureRequest): DoughT
     }
   };
   const mixed = read(req.mixedAt, 'mixedAt');
+  if (req.changeAt !== undefined) read(req.changeAt, 'changeAt');
   const wantedHours = (read(req.wantedEndAt, 'wantedEndAt').ms - mixed.ms) / MS_PER_HOUR;
   if (!(wantedHours > 0)) throw new BakersMathError('wantedEndAt', 'wantedEndAt must be after mixedAt');
   const lo = req.minC ?? DEFAULTS.leverMinC;
   const hiAsked = req.maxC ?? DEFAULTS.leverMaxC;
   if (!(hiAsked > lo)) throw new BakersMathError('maxC', 'maxC must be above minC');
   const hi = warmestUsefulC(kinetics, lo, hiAsked);
-  const hours = (c: number): number => bulkHoursAt(req.dough, req.mixedAt, c, kinetics);
+  const hours = (c: number): number => bulkHoursAfterChange(req, c, kinetics);
   const answer = (c: number, reason: string | null): DoughTemperatureAnswer => {
     const h = hours(c);
     return {

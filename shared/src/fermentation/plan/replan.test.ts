@@ -32,6 +32,7 @@ describe('replanBake', () => {
     expect(live.steps.filter((s) => s.done).map((s) => s.id)).toEqual(['feed-starter', 'starter-rise', 'mix']);
     expect(live.bulk.status).toBe('fermenting');
     expect(live.warnings).toEqual([]);
+    expect(live.temperatureLever).toBeNull();
   });
 
   it('a mix checked off 20 min late moves every later step by 20 min; the cooling absorbs what it can', () => {
@@ -129,5 +130,45 @@ describe('replanBake', () => {
     expect(hours(step(big, 'retard').startAt, step(big, 'retard').endAt)).toBeCloseTo(8, 6);
     expect(ms(step(big, 'bake').startAt)).toBeGreaterThan(ms(step(retard, 'bake').startAt));
     expect(big.warnings.join(' ')).toMatch(/8 h in the fridge/);
+  });
+
+  it('live lever: a slow bulk heading into the night gets a warmer spot that ends it before 22:30', () => {
+    const quietHours = { from: '23:00', until: '06:00' };
+    const request = input({ readyAt: '2026-12-05T10:00:00+01:00', quietHours });
+    const retard = planBake(request).options.find((o) => o.kind === 'overnight-retard') as PlanOption;
+    const t =
+      retard.timing ??
+      (() => {
+        throw new Error('no timing');
+      })();
+    const mix = step(retard, 'mix').startAt;
+    const now = addHours(mix, 3);
+    const doughTemperatures = [
+      { at: mix, c: 24 },
+      { at: now, c: 19 },
+    ];
+    const live = replanBake(request, t, {
+      now,
+      done: [{ id: 'mix', startedAt: mix }],
+      doughTemperatures,
+    });
+    expect(step(live, 'shape').inQuietHours).toBe(true);
+    const lever = live.temperatureLever;
+    expect(lever).not.toBeNull();
+    if (!lever) return;
+    expect(lever.doughTemperatureC).toBeGreaterThan(19);
+    expect(lever.fromAt).toBe(now);
+    expect(lever.reason).toMatch(/warmer spot/);
+    // The oracle: the logged temperatures, then the new spot from now.
+    const e = predictBulkEnd({
+      ...DOUGH,
+      temperatureC: undefined,
+      mixedAt: mix,
+      temperatures: doughTemperatures,
+      forecast: [{ c: lever.doughTemperatureC, from: now }],
+    });
+    expect(hours(mix, lever.bulkEndAt)).toBeCloseTo(e.hoursFromMix ?? NaN, 3);
+    // Shaped (30 min) before 23:00.
+    expect(ms(lever.bulkEndAt)).toBeLessThanOrEqual(ms('2026-12-04T22:30:00+01:00'));
   });
 });

@@ -7,6 +7,7 @@ import { MS_PER_HOUR, parseMs } from '../temperature/time.js';
 import { BakersMathError, requireFinite } from '../units/bakers-math-error.js';
 import { starterPeakHours } from './durations.js';
 import { formatSteps, quietClashReason } from './format.js';
+import { liveTemperatureLever } from './live-lever.js';
 import { bulkSpreadWarnings, planQuiet } from './plan-bake.js';
 import { resolvePlanInput } from './resolve-input.js';
 import { buildTimeline, type Anchors, type Live } from './timeline.js';
@@ -117,6 +118,7 @@ export function replanBake(input: PlanInput, timing: PlanTiming, progress: PlanP
       readingsUsed: bulk.readingsUsed,
     },
     readyAt: at(timeline.readyMs),
+    temperatureLever: liveTemperatureLever(plan, timeline, live, quiet, doughC),
     warnings: [...timeline.warnings, ...(clash ? [clash] : []), ...bulkSpreadWarnings(plan, timeline, bulk, quiet)],
   };
 }

@@ -231,6 +231,17 @@ export interface PlanProgress {
   aliquotReadings?: AliquotReading[];
 }
 
+/** Live: a spot to move the dough to now so bulk ends outside quiet hours. */
+export interface LiveTemperatureLever {
+  /** In half degrees, within 18–30 °C. */
+  doughTemperatureC: number;
+  /** From when (the re-plan's now). */
+  fromAt: string;
+  /** Bulk end at that temperature. */
+  bulkEndAt: string;
+  reason: string;
+}
+
 export interface LivePlan {
   now: string;
   timing: PlanTiming;
@@ -244,5 +255,7 @@ export interface LivePlan {
     readingsUsed: number;
   };
   readyAt: string | null;
+  /** Offered when the bulk would end so that shaping falls in quiet hours. */
+  temperatureLever: LiveTemperatureLever | null;
   warnings: string[];
 }
