@@ -101,6 +101,8 @@ describe('correcting one feeding on a phone', () => {
 
     // The culture page's feedings table: a tap on the row (not only its date link) opens the feeding.
     await page.reload();
+    await page.getByRole('table', { name: 'Feedings' }).scrollIntoViewIfNeeded();
+    await page.screenshot({ path: join(RESULTS_DIR, 'culture-feedings-table.png') });
     await page.getByRole('table', { name: 'Feedings' }).getByText('75.2 °F').click();
     await page.waitForURL(`${base}/feedings/${feeding.id}`);
     await page.getByRole('heading', { name: 'Feeding · Pip', level: 1 }).waitFor();

@@ -22,6 +22,22 @@ import { useFeedings } from '@/lib/logbook/get-feedings';
 const when = (iso: string, timeZone: string) =>
   new Date(iso).toLocaleString('en-GB', { timeZone, dateStyle: 'medium', timeStyle: 'short' });
 
+// On a phone the cells pad less, so four columns fit without the amounts breaking at every colon.
+const tableSx = { '& .MuiTableCell-root': { px: { xs: 1, sm: 2 } } } as const;
+
+/** "1.06 : 2.12 : 2.12 oz" kept whole, or broken only before its unit when the column is narrow. */
+function Amounts({ text }: { text: string }) {
+  const cut = text.lastIndexOf(' ');
+  return (
+    <>
+      <Box component="span" sx={{ whiteSpace: 'nowrap' }}>
+        {text.slice(0, cut)}
+      </Box>{' '}
+      {text.slice(cut + 1)}
+    </>
+  );
+}
+
 /** Every feeding of the culture, newest first unless turned around, a page at a time. */
 export function FeedingsTable({ cultureId, account }: { cultureId: string; account: Account }) {
   const [order, setOrder] = useState<SortOrder>('desc');
@@ -51,7 +67,7 @@ export function FeedingsTable({ cultureId, account }: { cultureId: string; accou
         {feedings.data && feedings.data.total > 0 && (
           <>
             <TableContainer>
-              <Table size="small" aria-label="Feedings">
+              <Table size="small" aria-label="Feedings" sx={tableSx}>
                 <TableHead>
                   <TableRow>
                     <TableCell sortDirection={order}>
@@ -74,7 +90,14 @@ export function FeedingsTable({ cultureId, account }: { cultureId: string; accou
                         Fed with
                       </Box>
                     </TableCell>
-                    <TableCell align="right">Temperature</TableCell>
+                    <TableCell align="right">
+                      <Box component="span" sx={{ display: { xs: 'none', sm: 'inline' } }}>
+                        Temperature
+                      </Box>
+                      <Box component="span" sx={{ display: { xs: 'inline', sm: 'none' } }}>
+                        Temp.
+                      </Box>
+                    </TableCell>
                     <TableCell align="right">Start height</TableCell>
                   </TableRow>
                 </TableHead>
@@ -87,9 +110,9 @@ export function FeedingsTable({ cultureId, account }: { cultureId: string; accou
                         </Link>
                       </TableCell>
                       <TableCell align="right">
-                        {formatWeights([f.starterG, f.flourG, f.waterG], account.unitSystem)}
+                        <Amounts text={formatWeights([f.starterG, f.flourG, f.waterG], account.unitSystem)} />
                       </TableCell>
-                      <TableCell align="right">
+                      <TableCell align="right" sx={{ whiteSpace: 'nowrap' }}>
                         {f.temperatureC === null ? '—' : formatTemperature(f.temperatureC, account.temperatureUnit, 1)}
                       </TableCell>
                       <TableCell align="right">
