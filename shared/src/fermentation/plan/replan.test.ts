@@ -98,6 +98,13 @@ describe('replanBake', () => {
     expect(step(live, 'bulk-end').startAt).toBe(addHours(mix, 5));
   });
 
+  it('a step left unchecked before one checked off stays where it was planned, not at now', () => {
+    const mix = planned('mix');
+    const live = replanBake(input(), timing, { now: addHours(mix.startAt, 0.5), done: asPlanned('mix') });
+    expect(step(live, 'feed-starter').startAt).toBe(planned('feed-starter').startAt);
+    expect(step(live, 'feed-starter').done).toBe(false);
+  });
+
   it('an overdue fold moves to now, and the next one follows at the interval', () => {
     const fold2 = planned('fold-2');
     const now = addHours(fold2.startAt, 0.25);

@@ -60,8 +60,15 @@ export function buildTimeline(
   const warnings: string[] = [];
   const m = plan.min;
   const actual = (id: string) => live?.done.get(id);
-  // An action not done by now cannot happen before now.
-  const notBefore = (t: number, action: boolean): number => (live && action ? Math.max(t, live.nowMs) : t);
+  // A step not checked off cannot happen before now — unless a later one was checked off, so it
+  // happened unrecorded (or was skipped) and stays where it was planned.
+  const order = sequence(plan.folds);
+  const rank = new Map(order.map((id, i) => [id, i]));
+  const lastDone = live ? Math.max(-1, ...[...live.done.keys()].map((id) => rank.get(id) ?? -1)) : -1;
+  const current = (id: string): boolean => (rank.get(id) ?? Infinity) > lastDone;
+  let placing = '';
+  const notBefore = (t: number, action: boolean): number =>
+    live && action && current(placing) ? Math.max(t, live.nowMs) : t;
   const place = (
     id: string,
     kind: PlanStepKind,
@@ -71,6 +78,7 @@ export function buildTimeline(
     extra: Partial<RawStep> = {},
   ): RawStep => {
     const done = actual(id);
+    placing = id;
     const s = done ? done.start : notBefore(start, action);
     const step: RawStep = {
       id,
@@ -99,6 +107,7 @@ export function buildTimeline(
   if (starter && !plan.starter.skip) {
     const feed = place('feed-starter', 'feed-starter', a.mixMs - hoursToMs(starter.hours), m.feed, true);
     const peak = feed.start + hoursToMs(starter.hours);
+    placing = 'mix';
     mixStart = actual('mix')?.start ?? notBefore(peak, true);
     wait('starter-rise', 'starter-rise', feed.end, Math.max(mixStart, feed.end), 'mix', {
       temperatureC: plan.starter.temperatureC,
@@ -122,6 +131,7 @@ export function buildTimeline(
   });
   const predicted = mix.start + hoursToMs(bulk.hoursFromMix ?? 0);
   const endDone = actual('bulk-end');
+  placing = 'bulk-end';
   const bulkEnd = endDone ? endDone.start : Math.max(notBefore(predicted, true), cursor);
   const bulkUnc = {
     low: mix.start + hoursToMs(bulk.lowHours ?? 0),
@@ -134,6 +144,7 @@ export function buildTimeline(
   let foldAt = cursor;
   for (let k = 1; k <= plan.folds; k++) {
     const id = `fold-${k}`;
+    placing = id;
     if (!actual(id) && notBefore(foldAt + m.foldInterval * MIN, true) + m.foldEach * MIN > bulkEnd) {
       warnings.push(`only ${k - 1} of ${plan.folds} sets of folds fit before the bulk ends`);
       break;
@@ -174,8 +185,8 @@ export function buildTimeline(
     wait('retard', 'retard', shape.end, takeOut, 'take-out', { temperatureC: fridgeC });
     bakeStart = place('take-out', 'take-out', takeOut, m.takeOut, true).end;
   }
-  const preheatDone = actual('preheat');
-  if (!preheatDone && live && !actual('bake') && bakeStart - m.preheat * MIN < live.nowMs) {
+  bakeStart = actual('bake')?.start ?? bakeStart;
+  if (live && current('preheat') && bakeStart - m.preheat * MIN < live.nowMs) {
     bakeStart = live.nowMs + m.preheat * MIN;
   }
   place('preheat', 'preheat', bakeStart - m.preheat * MIN, m.preheat, true, { temperatureC: plan.ovenC });
@@ -190,4 +201,14 @@ export function buildTimeline(
   wait('cool', 'cool', bake.end, ready, 'finish');
   const finish = place('finish', 'finish', ready, m.finish, true);
   return { steps, bulk, mixMs: mix.start, bakeMs: bake.start, readyMs: finish.start, warnings };
+}
+
+/** Step ids in the order they happen, for "was a later step checked off?". */
+function sequence(folds: number): string[] {
+  const foldIds = Array.from({ length: folds }, (_, i) => `fold-${i + 1}`);
+  return [
+    ...['feed-starter', 'starter-rise', 'mix', 'rest', 'add-salt', 'bulk'],
+    ...foldIds,
+    ...['bulk-end', 'shape', 'proof', 'retard', 'take-out', 'preheat', 'bake', 'cool', 'finish'],
+  ];
 }
