@@ -116,6 +116,14 @@ describe('correcting one feeding on a phone', () => {
 
     // Edit: a heavier starter and a warmer room, typed in °F.
     await page.getByRole('button', { name: 'Edit feeding' }).click();
+    // The server's refusal lands under the field it is about: a feeding can't move after its rise checks.
+    const fedAtText = await page.getByLabel('Fed at').inputValue();
+    await page.getByLabel('Fed at').fill(await localInput(page, Date.now()));
+    await page.getByRole('button', { name: 'Save changes' }).click();
+    const fedAtError = page.getByText('This feeding has rise checks or temperatures from before this time.');
+    await fedAtError.waitFor();
+    expect(await page.getByLabel('Fed at').getAttribute('aria-invalid')).toBe('true');
+    await page.getByLabel('Fed at').fill(fedAtText);
     await page.getByLabel('Starter', { exact: true }).fill('40');
     await page.getByLabel('Room or jar temperature').fill('78.8');
     await page.getByText('Ratio 1 : 1.5 : 1.5 (starter : flour : water)').waitFor();
@@ -130,6 +138,14 @@ describe('correcting one feeding on a phone', () => {
     // 78.8 °F = 26 °C (NIST SP 811 B.9); the untouched height keeps its stored value.
     expect(edited).toMatchObject({ starterG: 40, flourG: 60, temperatureC: 26, initialHeightMm: 40.6 });
     expect(edited.fedAt).toBe(feeding.fedAt);
+
+    // A reading from before the feeding is refused at its time field.
+    await page.getByLabel('Temperature', { exact: true }).fill('70');
+    await page.getByLabel('Taken at').fill(await localInput(page, fedAt - HOUR));
+    await page.getByRole('button', { name: 'Add reading' }).click();
+    await page.getByText(/before (this|the) feeding/i).waitFor();
+    expect(await page.getByLabel('Taken at').getAttribute('aria-invalid')).toBe('true');
+    await page.getByLabel('Taken at').fill(await localInput(page, Date.now()));
 
     // Two temperature readings: one now (the default time), one an hour after feeding.
     await page.getByLabel('Temperature', { exact: true }).fill('71.6');
