@@ -41,6 +41,8 @@ export function toModelIngredients(request: ComputeFormulaRequest) {
     const w = weighed[i]!;
     const ingredient: Ingredient = { name: line.name, kind: modelKind(line.kind), grams: w.grams };
     if (line.kind === 'starter' && line.starterHydrationPct != null) ingredient.hydration = line.starterHydrationPct;
+    // Named after its starter, so the total formula reads "Flour in Levain" rather than a bare "flour".
+    if (line.kind === 'starter') ingredient.flourName = `Flour in ${line.name}`;
     if (w.food !== undefined && FOOD_SETS_WATER.includes(line.kind)) ingredient.food = w.food;
     return ingredient;
   });
