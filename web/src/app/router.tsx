@@ -31,6 +31,11 @@ function createAppRouter() {
           element: <RequireAuth />,
           children: [
             {
+              // A bare sheet to print: outside the shell, so no navigation bars on paper.
+              path: 'formulas/:id/print',
+              lazy: async () => ({ Component: (await import('./routes/formula-print')).FormulaPrintRoute }),
+            },
+            {
               element: <AppShell />,
               children: [
                 {
@@ -60,6 +65,29 @@ function createAppRouter() {
                 {
                   path: 'feedings/:id',
                   lazy: async () => ({ Component: (await import('./routes/feeding')).FeedingRoute }),
+                },
+                {
+                  path: 'formulas',
+                  children: [
+                    {
+                      index: true,
+                      lazy: async () => ({ Component: (await import('./routes/formula-list')).FormulaListRoute }),
+                    },
+                    {
+                      path: 'water-temperature',
+                      lazy: async () => ({
+                        Component: (await import('./routes/formula-water-temperature')).FormulaWaterTemperatureRoute,
+                      }),
+                    },
+                    {
+                      path: 'new',
+                      lazy: async () => ({ Component: (await import('./routes/formula-editor')).FormulaEditorRoute }),
+                    },
+                    {
+                      path: ':id',
+                      lazy: async () => ({ Component: (await import('./routes/formula-editor')).FormulaEditorRoute }),
+                    },
+                  ],
                 },
                 {
                   path: 'account',

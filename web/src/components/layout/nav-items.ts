@@ -2,6 +2,7 @@ import AdminPanelSettingsOutlined from '@mui/icons-material/AdminPanelSettingsOu
 import HomeOutlined from '@mui/icons-material/HomeOutlined';
 import KitchenOutlined from '@mui/icons-material/KitchenOutlined';
 import PersonOutlined from '@mui/icons-material/PersonOutlined';
+import ScaleOutlined from '@mui/icons-material/ScaleOutlined';
 import type SvgIcon from '@mui/material/SvgIcon';
 import type { NavTarget } from './nav-match';
 
@@ -18,6 +19,7 @@ export interface NavItem extends NavTarget {
  */
 export const NAV_ITEMS: readonly NavItem[] = [
   { label: 'Shelf', to: '/shelf', alsoSections: ['/cultures'], icon: KitchenOutlined },
+  { label: 'Formula', to: '/formulas', icon: ScaleOutlined },
   { label: 'Home', to: '/', icon: HomeOutlined },
   { label: 'Account', to: '/account', icon: PersonOutlined },
   {

@@ -1,0 +1,5 @@
+import { WaterTemperaturePage } from '@/features/formula/components/water-temperature-page';
+
+export function FormulaWaterTemperatureRoute() {
+  return <WaterTemperaturePage />;
+}

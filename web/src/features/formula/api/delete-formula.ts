@@ -1,0 +1,16 @@
+import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { api } from '@/lib/api-client';
+import { formulaKeys } from './query-keys';
+
+/** DELETE /api/formulas/:id → 204. */
+export function deleteFormula(id: string): Promise<void> {
+  return api.delete<void>(`/formulas/${encodeURIComponent(id)}`);
+}
+
+export function useDeleteFormula() {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: deleteFormula,
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: formulaKeys.all }),
+  });
+}
