@@ -128,4 +128,18 @@ describe('planBake: the temperature lever', () => {
     expect(ms(step(lever?.option ?? { steps: [] }, 'cool').endAt)).toBe(ms('2026-12-05T15:00:00+01:00'));
     expect(Math.abs((lever?.doughTemperatureC ?? 20) - 20)).toBeGreaterThanOrEqual(0.5);
   });
+
+  it('when neither option fits, a spot that lets the overnight retard fit', () => {
+    // Start at 08:00, quiet from 20:00: at 24 °C bulk ends near 20:30, too late to shape.
+    const p = planBake(input({ mode: 'start-now', quietHours: { from: '20:00', until: '06:30' } }));
+    expect(p.options.map((o) => o.fits)).toEqual([false, false]);
+    const lever = p.temperatureLever;
+    expect(lever?.option.kind).toBe('overnight-retard');
+    expect(lever?.option.fits).toBe(true);
+    expect(lever?.doughTemperatureC).toBeGreaterThan(24);
+    expect(lever?.reason).toMatch(/then the overnight retard fits/);
+    for (const s of lever?.option.steps.filter((x) => x.action) ?? []) {
+      expect(inQuiet(s, 20 * 60, 6 * 60 + 30), s.id).toBe(false);
+    }
+  });
 });

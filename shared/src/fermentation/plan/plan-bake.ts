@@ -7,11 +7,18 @@ import { MS_PER_HOUR } from '../temperature/time.js';
 import { DEFAULTS } from './defaults.js';
 import { starterPeakHours } from './durations.js';
 import { clock, formatSteps, quietClashReason, stepName } from './format.js';
-import { findTemperatureLever } from './plan-lever.js';
+import { findRetardLever, findTemperatureLever, type LeverFound } from './plan-lever.js';
 import { resolvePlanInput, type ResolvedPlan } from './resolve-input.js';
 import { solveOption, type ScheduleContext, type Solution } from './schedule.js';
 import { type Timeline } from './timeline.js';
-import { type BakePlan, type PlanInput, type PlanOption, type PlanOptionKind, type PlanTiming } from './types.js';
+import {
+  type BakePlan,
+  type PlanInput,
+  type PlanOption,
+  type PlanOptionKind,
+  type PlanTiming,
+  type TemperatureLever,
+} from './types.js';
 import { formatInZone, overlapsQuiet, quietIntervals, type Interval } from './zone.js';
 
 const DAY = 24 * MS_PER_HOUR;
@@ -90,6 +97,26 @@ function planOption(ctx: ScheduleContext, kind: PlanOptionKind, quiet: readonly 
   return { option, attempt: attempt?.timeline ?? null };
 }
 
+function leverOf(
+  plan: ResolvedPlan,
+  kind: PlanOptionKind,
+  lever: LeverFound,
+  quiet: readonly Interval[],
+): TemperatureLever {
+  const bulkEnd = lever.bulkEndMs;
+  const spot = lever.doughC > plan.doughC ? 'warmer' : 'cooler';
+  const name = kind === 'same-day' ? 'the same-day plan' : 'the overnight retard';
+  return {
+    doughTemperatureC: lever.doughC,
+    currentDoughTemperatureC: plan.doughC,
+    bulkEndAt: formatInZone(bulkEnd, plan.timeZone),
+    reason:
+      `a ${spot} spot: keep the dough near ${lever.doughC.toFixed(1)} °C during bulk (the plan assumed ` +
+      `${plan.doughC} °C) so bulk ends by ${clock(bulkEnd, plan.timeZone)}; then ${name} fits`,
+    option: toOption(plan, kind, { anchors: lever.anchors, timeline: lever.timeline }, quiet),
+  };
+}
+
 export function planBake(input: PlanInput): BakePlan {
   const plan = resolvePlanInput(input);
   const ctx: ScheduleContext = { plan, starter: plan.starter.skip ? null : starterPeakHours(plan) };
@@ -103,20 +130,11 @@ export function planBake(input: PlanInput): BakePlan {
   let temperatureLever: BakePlan['temperatureLever'] = null;
   if (!sameDay.option.fits && sameDay.attempt) {
     const lever = findTemperatureLever(ctx, sameDay.attempt, quiet);
-    if (lever) {
-      const option = toOption(plan, 'same-day', { anchors: lever.anchors, timeline: lever.timeline }, quiet);
-      const bulkEnd = lever.timeline.steps.find((s) => s.kind === 'bulk-end')?.start ?? lever.bulkEndMs;
-      const warmer = lever.doughC > plan.doughC ? 'warmer' : 'cooler';
-      temperatureLever = {
-        doughTemperatureC: lever.doughC,
-        currentDoughTemperatureC: plan.doughC,
-        bulkEndAt: formatInZone(bulkEnd, plan.timeZone),
-        reason:
-          `a ${warmer} spot: keep the dough near ${lever.doughC.toFixed(1)} °C during bulk (the plan assumed ` +
-          `${plan.doughC} °C) so bulk ends by ${clock(bulkEnd, plan.timeZone)}; then the same-day plan fits`,
-        option,
-      };
-    }
+    if (lever) temperatureLever = leverOf(plan, 'same-day', lever, quiet);
+  }
+  if (!temperatureLever && !sameDay.option.fits && !retard.option.fits) {
+    const lever = findRetardLever(ctx, quiet);
+    if (lever) temperatureLever = leverOf(plan, 'overnight-retard', lever, quiet);
   }
   return {
     mode: plan.mode,

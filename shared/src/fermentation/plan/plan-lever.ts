@@ -6,7 +6,7 @@
 import { formatInstant } from '../temperature/time.js';
 import { DEFAULTS, GRID_MINUTES } from './defaults.js';
 import { bulkHoursAt, warmestUsefulC } from './lever.js';
-import { type ScheduleContext } from './schedule.js';
+import { solveOption, type ScheduleContext } from './schedule.js';
 import { buildTimeline, type Anchors, type Timeline } from './timeline.js';
 import { overlapsQuiet, type Interval } from './zone.js';
 
@@ -113,7 +113,30 @@ export function findTemperatureLever(
       doughC: cand.c,
     };
     const timeline = buildTimeline(plan, ctx.starter, anchors);
-    if (fits(ctx, timeline, quiet)) return { doughC: cand.c, bulkEndMs: cand.end, anchors, timeline };
+    if (!fits(ctx, timeline, quiet)) continue;
+    const bulkEndMs = timeline.steps.find((x) => x.kind === 'bulk-end')?.start ?? cand.end;
+    return { doughC: cand.c, bulkEndMs, anchors, timeline };
+  }
+  return null;
+}
+
+/**
+ * The same lever for the overnight retard, when neither option fits: the retard's own search
+ * run at constant bulk temperatures in half degrees, nearest the baker's first.
+ */
+export function findRetardLever(ctx: ScheduleContext, quiet: readonly Interval[]): LeverFound | null {
+  const { plan } = ctx;
+  const lo = DEFAULTS.leverMinC;
+  const hi = warmestUsefulC(plan.kinetics, lo, DEFAULTS.leverMaxC);
+  const current = roundHalf(plan.doughC);
+  const temperatures: number[] = [];
+  for (let c = Math.ceil(lo * 2) / 2; c <= hi + 1e-9; c += 0.5) if (c !== current) temperatures.push(c);
+  temperatures.sort((a, b) => Math.abs(a - plan.doughC) - Math.abs(b - plan.doughC));
+  for (const c of temperatures) {
+    const s = solveOption(ctx, 'overnight-retard', { quiet, respectNow: true, doughC: c });
+    if (!s) continue;
+    const bulkEndMs = s.timeline.steps.find((x) => x.kind === 'bulk-end')?.start ?? s.timeline.mixMs;
+    return { doughC: c, bulkEndMs, anchors: s.anchors, timeline: s.timeline };
   }
   return null;
 }

@@ -192,7 +192,7 @@ export interface PlanOption {
   warnings: string[];
 }
 
-/** A constant dough temperature for the bulk that would let the same-day plan fit. */
+/** A constant bulk temperature that would let the same-day plan (or, failing that, the retard) fit. */
 export interface TemperatureLever {
   doughTemperatureC: number;
   /** The temperature the plan assumed (the constant, or the forecast's last value). */
@@ -211,7 +211,10 @@ export interface BakePlan {
   /** The option to show first: the one asked for if it fits, else the other, else null. */
   recommended: PlanOptionKind | null;
   options: PlanOption[];
-  /** Offered when the same-day plan does not fit and a warmer or cooler spot (18–30 °C) would. */
+  /**
+   * Offered when the same-day plan does not fit and a warmer or cooler spot (18–30 °C) would; or,
+   * when neither option fits, a spot that lets the retard fit (see `option.kind`).
+   */
   temperatureLever: TemperatureLever | null;
   /** Defaults the planner took, in words. */
   assumptions: string[];
