@@ -13,6 +13,7 @@ interface FeedingJson {
   flourG: number;
   temperatureC: number | null;
   initialHeightMm: number | null;
+  observations: string[];
 }
 
 /** "2026-12-01T10:05" in the browser's zone, as a datetime-local input takes it. */
@@ -127,6 +128,7 @@ describe('correcting one feeding on a phone', () => {
     await page.getByLabel('Starter', { exact: true }).fill('40');
     await page.getByLabel('Room or jar temperature').fill('78.8');
     await page.getByText('Ratio 1 : 1.5 : 1.5 (starter : flour : water)').waitFor();
+    await page.getByRole('button', { name: 'Discolouration' }).click();
     expect(await page.getByText('°F', { exact: true }).count()).toBeGreaterThan(0);
     await page.getByRole('heading', { name: 'Correct this feeding' }).scrollIntoViewIfNeeded();
     await page.screenshot({ path: join(RESULTS_DIR, 'feeding-edit.png') });
@@ -134,10 +136,13 @@ describe('correcting one feeding on a phone', () => {
     await page.getByRole('heading', { name: 'As recorded' }).waitFor();
     await page.getByText('Saved. The culture’s forecast now uses the corrected feeding.').waitFor();
     await page.getByText('78.8 °F', { exact: true }).waitFor();
+    // A discoloured jar keeps its caution on the record, not only in the form.
+    await page.getByRole('alert').getByText('is discarded, not rescued', { exact: false }).waitFor();
     const edited = await getJson<FeedingJson>(page, `${base}/api/feedings/${feeding.id}`);
     // 78.8 °F = 26 °C (NIST SP 811 B.9); the untouched height keeps its stored value.
     expect(edited).toMatchObject({ starterG: 40, flourG: 60, temperatureC: 26, initialHeightMm: 40.6 });
     expect(edited.fedAt).toBe(feeding.fedAt);
+    expect(edited.observations).toEqual(['bubbles', 'discolouration']);
 
     // A reading from before the feeding is refused at its time field.
     await page.getByLabel('Temperature', { exact: true }).fill('70');
