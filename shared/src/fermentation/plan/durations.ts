@@ -4,8 +4,8 @@ import { predictBulkEnd } from '../bulk/bulk-end.js';
 import { type AliquotReading, type BulkEstimate, type BulkInput } from '../bulk/types.js';
 import { predictNextPeak } from '../kinetics/predict.js';
 import { relativeRate } from '../temperature/models.js';
-import { type TemperatureSample } from '../temperature/series.js';
-import { MS_PER_HOUR, formatInstant } from '../temperature/time.js';
+import { type ForecastSegment, type TemperatureSample } from '../temperature/series.js';
+import { MS_PER_HOUR, formatInstant, parseMs } from '../temperature/time.js';
 import { BakersMathError } from '../units/bakers-math-error.js';
 import { PROOF_SHARE_OF_BULK } from './defaults.js';
 import { type ResolvedPlan } from './resolve-input.js';
@@ -61,6 +61,16 @@ export function bulkEstimate(plan: ResolvedPlan, mixMs: number, run: BulkRun = {
   return estimate;
 }
 
+/** The part of a forecast still ahead of the last logged reading (the readings replace the rest). */
+function forecastAfter(forecast: readonly ForecastSegment[], logged: readonly TemperatureSample[]): ForecastSegment[] {
+  const last = Math.max(...logged.map((t) => parseMs(t.at)));
+  const ahead = forecast.filter((f) => f.until === undefined || parseMs(f.until) > last);
+  return ahead.map((f) => {
+    const from = f.from !== undefined && parseMs(f.from) > last ? f.from : undefined;
+    return { c: f.c, ...(from === undefined ? {} : { from }), ...(f.until === undefined ? {} : { until: f.until }) };
+  });
+}
+
 function estimateBulk(plan: ResolvedPlan, mixMs: number, run: BulkRun): BulkEstimate {
   const dough: BulkInput = { ...plan.dough, mixedAt: formatInstant(mixMs, null) };
   if (run.doughC !== undefined && run.doughC !== null) {
@@ -70,6 +80,7 @@ function estimateBulk(plan: ResolvedPlan, mixMs: number, run: BulkRun): BulkEsti
     // With logged readings the dough stays at the last one (the series holds it), unless the
     // baker gave a forecast; the planned constant would otherwise override what was measured.
     delete dough.temperatureC;
+    if (dough.forecast) dough.forecast = forecastAfter(dough.forecast, run.temperatures);
   }
   if (run.temperatures?.length) dough.temperatures = run.temperatures;
   if (run.readings?.length) dough.readings = run.readings;

@@ -149,6 +149,16 @@ describe('planBake: temperature', () => {
     expect(hours(proof.startAt, proof.endAt)).toBeCloseTo(0.4 * bulk, 2);
   });
 
+  it('a forecast (cool morning, warmer afternoon) is integrated as predictBulkEnd does', () => {
+    const forecast = [{ c: 19, until: '2026-12-05T12:00:00+01:00' }, { c: 25 }];
+    const dough = { ...DOUGH, temperatureC: undefined, forecast };
+    const o = option(planBake(input({ dough })), 'same-day');
+    const mix = step(o, 'mix').startAt;
+    const e = predictBulkEnd({ ...dough, mixedAt: mix });
+    expect(hours(mix, step(o, 'bulk-end').startAt)).toBeCloseTo(e.hoursFromMix ?? NaN, 3);
+    expect(step(o, 'bulk').temperatureC).toBe(25);
+  });
+
   it("a baker-given proof is used as given, at the baker's proof temperature", () => {
     const o = option(
       planBake(input({ steps: { finalProof: { kind: 'room', hours: 2.5, temperatureC: 26 } } })),

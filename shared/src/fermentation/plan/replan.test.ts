@@ -178,4 +178,32 @@ describe('replanBake', () => {
     // Shaped (30 min) before 23:00.
     expect(ms(lever.bulkEndAt)).toBeLessThanOrEqual(ms('2026-12-04T22:30:00+01:00'));
   });
+
+  it('logged temperatures replace the part of a planned forecast they cover', () => {
+    const forecast = [{ c: 22, until: '2026-12-05T09:00:00+01:00' }, { c: 26 }];
+    const request = input({ dough: { ...DOUGH, temperatureC: undefined, forecast } });
+    const p = planBake(request).options.find((o) => o.kind === 'same-day') as PlanOption;
+    const t =
+      p.timing ??
+      (() => {
+        throw new Error('no timing');
+      })();
+    const mix = step(p, 'mix').startAt;
+    const now = addHours(mix, 4);
+    const doughTemperatures = [
+      { at: mix, c: 21 },
+      { at: now, c: 23 },
+    ];
+    const live = replanBake(request, t, { now, done: [{ id: 'mix', startedAt: mix }], doughTemperatures });
+    // The last reading comes after the 22 °C stretch ended: what is left is 26 °C from then on.
+    expect(ms(now)).toBeGreaterThan(ms('2026-12-05T09:00:00+01:00'));
+    const e = predictBulkEnd({
+      ...DOUGH,
+      temperatureC: undefined,
+      mixedAt: mix,
+      temperatures: doughTemperatures,
+      forecast: [{ c: 26 }],
+    });
+    expect(hours(mix, live.bulk.endAt ?? '')).toBeCloseTo(e.hoursFromMix ?? NaN, 3);
+  });
 });
