@@ -149,5 +149,11 @@ describe('Formula on a phone', () => {
     await page.goto(`${base}/formulas/${id}`);
     await expect.poll(() => resultOf(page, 1).innerText(), { timeout: 10_000 }).toContain('411 g');
     await page.screenshot({ path: join(RESULTS_DIR, 'formula-editor-desktop.png') });
+
+    // Deleting asks once more, then the list is empty again.
+    await page.getByRole('button', { name: 'Delete formula' }).click();
+    await page.getByRole('button', { name: 'Delete', exact: true }).click();
+    await page.waitForURL(`${base}/formulas`);
+    await page.getByText('No formulas yet.', { exact: false }).waitFor();
   });
 });

@@ -11,6 +11,7 @@ export function useDeleteFormula() {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: deleteFormula,
-    onSuccess: () => queryClient.invalidateQueries({ queryKey: formulaKeys.all }),
+    // Only the lists: refetching the deleted formula itself would flash a 404 before the page moves on.
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: formulaKeys.lists }),
   });
 }

@@ -15,6 +15,7 @@ import { Link as RouterLink } from 'react-router-dom';
 import { FormAlert } from '@/components/form/form-alert';
 import { FormTextField } from '@/components/form/form-text-field';
 import { applyServerErrors } from '@/lib/form-errors';
+import { useSignedInAccount } from '@/lib/auth/use-signed-in-account';
 import { useIdempotencyKey } from '@/lib/idempotency';
 import { useComputedFormula } from '../api/compute-formula';
 import { useCreateFormula } from '../api/create-formula';
@@ -23,6 +24,7 @@ import { formFields, liveProblems } from '../utils/editor-errors';
 import { emptyRow, toCreateRequest, toLiveRequest, type FormulaFormValues } from '../utils/formula-form';
 import { useDebounced } from '../utils/use-debounced';
 import { BlendCard } from './blend-card';
+import { DeleteFormulaButton } from './delete-formula-button';
 import { FormulaCautions } from './formula-cautions';
 import { FormulaFigures, type FormulaViewMode } from './formula-figures';
 import { IngredientRow } from './ingredient-row';
@@ -43,6 +45,7 @@ export function FormulaEditor({ formula, defaultValues, onSaved }: FormulaEditor
   const create = useCreateFormula();
   const update = useUpdateFormula(formula?.id ?? '');
   const idempotency = useIdempotencyKey();
+  const { unitSystem } = useSignedInAccount();
 
   const values = useWatch({ control }) as FormulaFormValues;
   const live = useDebounced(toLiveRequest(values), 250);
@@ -103,6 +106,7 @@ export function FormulaEditor({ formula, defaultValues, onSaved }: FormulaEditor
                     index={i}
                     line={lineOf.get(i)}
                     view={view}
+                    system={unitSystem}
                     onRemove={() => remove(i)}
                   />
                 ))}
@@ -130,7 +134,7 @@ export function FormulaEditor({ formula, defaultValues, onSaved }: FormulaEditor
         </Stack>
       </Box>
       <BlendCard control={control} blend={current?.blend ?? []} finalDoughFlourG={current?.finalDoughFlourG ?? null} />
-      <ScalingCard control={control} scaled={current?.scaled ?? null} />
+      <ScalingCard control={control} scaled={current?.scaled ?? null} system={unitSystem} />
       <FormTextField control={control} name="notes" label="Notes" multiline minRows={2} />
       <FormAlert message={formState.errors.root?.server?.message} />
       <Button type="submit" variant="contained" size="large" loading={formState.isSubmitting} sx={{ minHeight: 56 }}>
@@ -150,6 +154,7 @@ export function FormulaEditor({ formula, defaultValues, onSaved }: FormulaEditor
           </Button>
         )}
       </Stack>
+      {formula && <DeleteFormulaButton formulaId={formula.id} name={formula.name} />}
     </Stack>
   );
 }

@@ -4,10 +4,10 @@ import IconButton from '@mui/material/IconButton';
 import InputAdornment from '@mui/material/InputAdornment';
 import Stack from '@mui/material/Stack';
 import Typography from '@mui/material/Typography';
-import { FORMULA_INGREDIENT_KINDS, FORMULA_UNITS, type FormulaLineView } from '@peakwise/shared';
+import { FORMULA_INGREDIENT_KINDS, FORMULA_UNITS, type FormulaLineView, type UnitSystem } from '@peakwise/shared';
 import { useWatch, type Control } from 'react-hook-form';
 import { FormTextField } from '@/components/form/form-text-field';
-import { formatGrams, formatPercent } from '../utils/format';
+import { formatGrams, formatPercent, ouncesFor } from '../utils/format';
 import { foodsFor, needsFood, takesDensity, type FormulaFormValues } from '../utils/formula-form';
 
 const KIND_LABEL: Record<(typeof FORMULA_INGREDIENT_KINDS)[number], string> = {
@@ -24,6 +24,12 @@ const KIND_LABEL: Record<(typeof FORMULA_INGREDIENT_KINDS)[number], string> = {
   other: 'Other',
 };
 
+// Water and milk by volume are weighed as tap water and whole milk until the baker says otherwise.
+const UNCHOSEN: Partial<Record<(typeof FORMULA_INGREDIENT_KINDS)[number], string>> = {
+  water: 'Tap water (default)',
+  milk: 'Whole milk (default)',
+};
+
 const native = { select: { native: true } } as const;
 const decimal = { inputMode: 'decimal' as const };
 const end = (u: string) => ({ endAdornment: <InputAdornment position="end">{u}</InputAdornment> });
@@ -34,11 +40,12 @@ interface IngredientRowProps {
   /** The computed line for this row; undefined while it is half typed or being computed. */
   line: FormulaLineView | undefined;
   view: 'total' | 'final';
+  system: UnitSystem;
   onRemove: () => void;
 }
 
 /** One ingredient: what it is, how much in which unit, and (live) its grams and baker's %. */
-export function IngredientRow({ control, index, line, view, onRemove }: IngredientRowProps) {
+export function IngredientRow({ control, index, line, view, system, onRemove }: IngredientRowProps) {
   const row = useWatch({ control, name: `ingredients.${index}` });
   const foods = foodsFor(row.kind);
   const showFood = needsFood(row) && (foods.length > 0 || row.food !== '');
@@ -106,6 +113,11 @@ export function IngredientRow({ control, index, line, view, onRemove }: Ingredie
             <Typography sx={{ fontWeight: 500, fontVariantNumeric: 'tabular-nums' }}>
               {line ? formatGrams(line.grams) : '—'}
             </Typography>
+            {line && ouncesFor(line.grams, system) && (
+              <Typography variant="caption" color="text.secondary" sx={{ display: 'block' }}>
+                {ouncesFor(line.grams, system)}
+              </Typography>
+            )}
             <Typography variant="body2" color="text.secondary" sx={{ fontVariantNumeric: 'tabular-nums' }}>
               {formatPercent(percent)}
             </Typography>
@@ -122,7 +134,7 @@ export function IngredientRow({ control, index, line, view, onRemove }: Ingredie
                 size="small"
                 slotProps={{ select: native.select, inputLabel: { shrink: true } }}
               >
-                <option value="">Not chosen</option>
+                <option value="">{UNCHOSEN[row.kind] ?? 'Not chosen'}</option>
                 {foods.map((f) => (
                   <option key={f.id} value={f.id}>
                     {f.name}

@@ -11,10 +11,10 @@ import TableRow from '@mui/material/TableRow';
 import ToggleButton from '@mui/material/ToggleButton';
 import ToggleButtonGroup from '@mui/material/ToggleButtonGroup';
 import Typography from '@mui/material/Typography';
-import type { FormulaScaledView } from '@peakwise/shared';
+import type { FormulaScaledView, UnitSystem } from '@peakwise/shared';
 import { Controller, useWatch, type Control } from 'react-hook-form';
 import { FormTextField } from '@/components/form/form-text-field';
-import { formatFactor, formatGrams } from '../utils/format';
+import { formatFactor, formatGrams, ouncesFor } from '../utils/format';
 import type { FormulaFormValues, ScaleChoice } from '../utils/formula-form';
 import { filledToggleSx } from '../utils/toggle-sx';
 
@@ -31,10 +31,11 @@ const CHOICES: { value: ScaleChoice; label: string }[] = [
 interface ScalingCardProps {
   control: Control<FormulaFormValues>;
   scaled: FormulaScaledView | null;
+  system: UnitSystem;
 }
 
 /** Scale the batch by a factor, to a dough weight, or to pieces × piece weight; weighable grams. */
-export function ScalingCard({ control, scaled }: ScalingCardProps) {
+export function ScalingCard({ control, scaled, system }: ScalingCardProps) {
   const by = useWatch({ control, name: 'scaling.by' });
   return (
     <Card>
@@ -131,6 +132,11 @@ export function ScalingCard({ control, scaled }: ScalingCardProps) {
                       <TableCell sx={{ pl: 0 }}>{l.name}</TableCell>
                       <TableCell align="right" sx={{ pr: 0, fontVariantNumeric: 'tabular-nums', fontWeight: 500 }}>
                         {formatGrams(l.roundedG)}
+                        {ouncesFor(l.roundedG, system) && (
+                          <Typography variant="caption" color="text.secondary" sx={{ display: 'block' }}>
+                            {ouncesFor(l.roundedG, system)}
+                          </Typography>
+                        )}
                       </TableCell>
                     </TableRow>
                   ))}
