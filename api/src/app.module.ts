@@ -3,6 +3,7 @@ import { APP_GUARD } from '@nestjs/core';
 import { AccountModule } from './account/account.module.js';
 import { AdminModule } from './admin/admin.module.js';
 import { AuthModule } from './auth/auth.module.js';
+import { BakePlanModule } from './bake-plan/bake-plan.module.js';
 import { SessionGuard } from './common/session.guard.js';
 import { ConfigModule } from './config.module.js';
 import { CultureModule } from './culture/culture.module.js';
@@ -34,6 +35,7 @@ export class AppModule {
         TemperatureModule,
         LogbookTransferModule,
         FormulaModule,
+        BakePlanModule,
       ],
       providers: [{ provide: APP_GUARD, useClass: SessionGuard }],
     };

@@ -11,6 +11,6 @@ import { CultureService } from './culture.service.js';
   imports: [IdempotencyModule],
   controllers: [CultureController, CultureSummaryController],
   providers: [CultureRepository, CultureService, CultureSummaryRepository, CultureSummaryService, SummaryClock],
-  exports: [CultureService],
+  exports: [CultureService, CultureSummaryRepository],
 })
 export class CultureModule {}

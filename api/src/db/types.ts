@@ -36,6 +36,37 @@ export interface Account {
   updatedAt: Generated<Timestamp>;
 }
 
+export interface BakePlan {
+  accountId: string;
+  cancelledAt: Timestamp | null;
+  createdAt: Generated<Timestamp>;
+  cultureId: string | null;
+  dairyOrEgg: Generated<boolean>;
+  feedingId: string | null;
+  finishedAt: Timestamp | null;
+  formulaId: string | null;
+  id: Generated<string>;
+  input: Json;
+  kineticsBasis: string;
+  name: string;
+  notes: string | null;
+  rating: number | null;
+  readyAt: Timestamp;
+  settings: Json;
+  status: Generated<string>;
+  timing: Json;
+  updatedAt: Generated<Timestamp>;
+}
+
+export interface BakePlanStep {
+  createdAt: Generated<Timestamp>;
+  endedAt: Timestamp | null;
+  planId: string;
+  startedAt: Timestamp;
+  stepId: string;
+  updatedAt: Generated<Timestamp>;
+}
+
 export interface Culture {
   accountId: string;
   archivedAt: Timestamp | null;
@@ -49,6 +80,15 @@ export interface Culture {
   parentCultureId: string | null;
   startedOn: Timestamp | null;
   updatedAt: Generated<Timestamp>;
+}
+
+export interface DoughReading {
+  createdAt: Generated<Timestamp>;
+  id: Generated<string>;
+  planId: string;
+  risePct: number | null;
+  takenAt: Timestamp;
+  temperatureC: number | null;
 }
 
 export interface Feeding {
@@ -146,7 +186,10 @@ export interface TemperatureReading {
 
 export interface DB {
   account: Account;
+  bakePlan: BakePlan;
+  bakePlanStep: BakePlanStep;
   culture: Culture;
+  doughReading: DoughReading;
   feeding: Feeding;
   formula: Formula;
   formulaBlendFlour: FormulaBlendFlour;

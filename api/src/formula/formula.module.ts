@@ -8,5 +8,6 @@ import { FormulaService } from './formula.service.js';
   imports: [IdempotencyModule],
   controllers: [FormulaController],
   providers: [FormulaRepository, FormulaService],
+  exports: [FormulaService],
 })
 export class FormulaModule {}

@@ -20,8 +20,8 @@ export const BAKE_PLAN_NAME_MAX_LENGTH = 80;
 export const BAKE_PLAN_NOTES_MAX_LENGTH = 4000;
 export const BAKE_PLAN_RATING_MIN = 1;
 export const BAKE_PLAN_RATING_MAX = 5;
-/** A plan may aim this far ahead; past it no forecast means much. */
-export const BAKE_PLAN_MAX_DAYS_AHEAD = 14;
+/** A plan may aim this far ahead: the planner's own look-ahead (PLAN_DEFAULTS.maxLookaheadHours ÷ 24). */
+export const BAKE_PLAN_MAX_DAYS_AHEAD = 7;
 /** Dough temperatures a plan accepts, °C (a fridge-cold dough to a very warm proofer). */
 export const DOUGH_TEMPERATURE_MIN_C = 0;
 export const DOUGH_TEMPERATURE_MAX_C = 40;

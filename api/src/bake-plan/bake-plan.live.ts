@@ -1,0 +1,96 @@
+import {
+  PLAN_DEFAULTS,
+  replanBake,
+  type AliquotReading,
+  type BakePlanView,
+  type CheckedStep,
+  type DoughReading,
+  type LivePlan,
+  type TemperatureSample,
+} from '@peakwise/shared';
+import type { BakePlanRow, CheckedStepRow, DoughReadingRow } from './bake-plan.repository.js';
+
+// The live Bench: the stored plan re-planned at "now" from what the baker checked off and logged.
+// Dough temperatures become the temperature series the model integrates; the aliquot jar's rise
+// becomes the readings that rescale the bulk.
+
+export function toCheckedStep(row: CheckedStepRow): CheckedStep {
+  return { stepId: row.stepId, startedAt: row.startedAt.toISOString(), endedAt: row.endedAt?.toISOString() ?? null };
+}
+
+export function toDoughReading(row: DoughReadingRow): DoughReading {
+  return {
+    id: row.id,
+    takenAt: row.takenAt.toISOString(),
+    temperatureC: row.temperatureC,
+    risePct: row.risePct,
+    createdAt: row.createdAt.toISOString(),
+  };
+}
+
+export function livePlan(
+  row: Pick<BakePlanRow, 'input' | 'timing'>,
+  checked: CheckedStepRow[],
+  readings: DoughReadingRow[],
+  now: Date,
+): LivePlan {
+  const doughTemperatures: TemperatureSample[] = readings.flatMap((r) =>
+    r.temperatureC === null ? [] : [{ at: r.takenAt.toISOString(), c: r.temperatureC }],
+  );
+  const aliquotReadings: AliquotReading[] = readings.flatMap((r) =>
+    r.risePct === null ? [] : [{ at: r.takenAt.toISOString(), risePct: r.risePct }],
+  );
+  // The input keeps its creation "now": the planner checks readyAt against it, and it was valid then.
+  return replanBake(row.input, row.timing, {
+    now: now.toISOString(),
+    done: checked.map((c) => ({
+      id: c.stepId,
+      startedAt: c.startedAt.toISOString(),
+      ...(c.endedAt ? { endedAt: c.endedAt.toISOString() } : {}),
+    })),
+    doughTemperatures,
+    aliquotReadings,
+  });
+}
+
+/**
+ * Step ids a check-off may name: those of the live timeline, and every set of folds the plan asked
+ * for (a set the live timeline dropped because the bulk ends early may still have been done).
+ */
+export function stepIdsOf(row: Pick<BakePlanRow, 'input'>, live: LivePlan): Set<string> {
+  const ids = new Set(live.steps.map((s) => s.id));
+  const sets = row.input.steps?.folds?.sets ?? PLAN_DEFAULTS.foldSets;
+  for (let k = 1; k <= Math.round(sets); k++) ids.add(`fold-${k}`);
+  return ids;
+}
+
+export function toView(
+  row: BakePlanRow,
+  checked: CheckedStepRow[],
+  readings: DoughReadingRow[],
+  now: Date,
+): BakePlanView {
+  return {
+    id: row.id,
+    name: row.name,
+    status: row.status,
+    formulaId: row.formulaId,
+    formulaName: row.formulaName,
+    cultureId: row.cultureId,
+    cultureName: row.cultureName,
+    settings: row.settings,
+    timing: row.timing,
+    kineticsBasis: row.kineticsBasis,
+    live: livePlan(row, checked, readings, now),
+    checked: checked.map(toCheckedStep),
+    readings: readings.map(toDoughReading),
+    dairyOrEgg: row.dairyOrEgg,
+    notes: row.notes,
+    rating: row.rating,
+    feedingId: row.feedingId,
+    finishedAt: row.finishedAt?.toISOString() ?? null,
+    cancelledAt: row.cancelledAt?.toISOString() ?? null,
+    createdAt: row.createdAt.toISOString(),
+    updatedAt: row.updatedAt.toISOString(),
+  };
+}
