@@ -42,8 +42,14 @@ describe('plan input errors name the field path', () => {
     [{ steps: { finalProof: { kind: 'freezer' } } }, 'steps.finalProof.kind'],
     [{ steps: { finalProof: { kind: 'retard', minHours: 16, maxHours: 8 } } }, 'steps.finalProof.maxHours'],
     [{ formula: { dairy: 1 } }, 'formula.dairy'],
+    [{ kinetics: { model: 'q10' } }, 'kinetics'],
   ])('%j → %s', (over, path) => {
     expect(bad(over)).toBe(path);
+  });
+
+  it('kinetics: null counts as absent (the published defaults)', () => {
+    const plan = planBake({ ...input(), kinetics: null });
+    expect(plan.assumptions).toContain('culture kinetics: published defaults (no feeding history)');
   });
 
   it('a levain that cannot peak (fridge-cold) is refused at its temperature', () => {

@@ -164,11 +164,13 @@ export function resolvePlanInput(raw: PlanInput): ResolvedPlan {
     quiet = { from, until, label: `${q.from as string}–${q.until as string}` };
   }
   const { dough, doughC } = readDough(obj(input.dough, 'dough', false) ?? {});
-  const kinetics = (input.kinetics as CultureKinetics | undefined) ?? defaultKinetics();
-  if (input.kinetics !== undefined && typeof (input.kinetics as Obj).params !== 'object') {
+  // null (a stored plan without a culture) counts as absent.
+  const given = (input.kinetics ?? undefined) as CultureKinetics | undefined;
+  if (given !== undefined && (typeof given !== 'object' || typeof given.params !== 'object')) {
     throw new BakersMathError('kinetics', 'kinetics must come from fitCultureKinetics');
   }
-  if (input.kinetics === undefined) assumptions.push('culture kinetics: published defaults (no feeding history)');
+  const kinetics = given ?? defaultKinetics();
+  if (given === undefined) assumptions.push('culture kinetics: published defaults (no feeding history)');
 
   const s = obj(input.starter, 'starter') ?? {};
   const r = obj(s.ratio, 'starter.ratio');

@@ -109,8 +109,8 @@ export interface PlanInput {
   timeZone: string;
   quietHours?: QuietHours | null;
   dough: PlanDough;
-  /** The culture's fitted kinetics (fitCultureKinetics); default the published priors. */
-  kinetics?: CultureKinetics;
+  /** The culture's fitted kinetics (fitCultureKinetics); absent or null: the published priors. */
+  kinetics?: CultureKinetics | null;
   starter?: PlanStarter;
   steps?: PlanStepOptions;
   formula?: FormulaFlags;
