@@ -6,8 +6,9 @@
 //     the window (bread fresh, the baker's evening short);
 //   start-now — mix at the levain's peak; a retard is baked at the first fitting time after its
 //     shortest fridge time.
-// "Fits": no action step touches quiet hours and (ready-at) nothing starts before now. Called with
-// no quiet hours, or without the "now" rule, the same search gives the nearest attempt to show.
+// "Fits": no action step touches quiet hours and (ready-at) nothing starts before now. With
+// `bestEffort` (and, if need be, without the "now" rule) the same search returns the candidate
+// with the fewest clashes: the nearest attempt to show with its reason.
 import { GRID_MINUTES } from './defaults.js';
 import { type HoursWithInterval } from './durations.js';
 import { type ResolvedPlan } from './resolve-input.js';
