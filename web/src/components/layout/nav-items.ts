@@ -1,4 +1,5 @@
 import AdminPanelSettingsOutlined from '@mui/icons-material/AdminPanelSettingsOutlined';
+import BakeryDiningOutlined from '@mui/icons-material/BakeryDiningOutlined';
 import HomeOutlined from '@mui/icons-material/HomeOutlined';
 import KitchenOutlined from '@mui/icons-material/KitchenOutlined';
 import PersonOutlined from '@mui/icons-material/PersonOutlined';
@@ -18,10 +19,12 @@ export interface NavItem extends NavTarget {
  * into the top bar's menu rather than shrinking the labels.
  */
 export const NAV_ITEMS: readonly NavItem[] = [
-  { label: 'Shelf', to: '/shelf', alsoSections: ['/cultures'], icon: KitchenOutlined },
+  { label: 'Shelf', to: '/shelf', alsoSections: ['/cultures', '/feedings'], icon: KitchenOutlined },
+  { label: 'Bench', to: '/bench', icon: BakeryDiningOutlined },
   { label: 'Formula', to: '/formulas', icon: ScaleOutlined },
   { label: 'Home', to: '/', icon: HomeOutlined },
-  { label: 'Account', to: '/account', icon: PersonOutlined },
+  // Admins reach their account from the top bar's menu, which keeps their bar at five entries.
+  { label: 'Account', to: '/account', icon: PersonOutlined, roles: ['baker', 'instructor'] },
   {
     label: 'Admin',
     to: '/admin/accounts',

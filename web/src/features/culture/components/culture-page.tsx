@@ -1,9 +1,9 @@
+import type { ReactNode } from 'react';
 import Typography from '@mui/material/Typography';
 import { LoadError } from '@/components/feedback/load-error';
 import { PageLoader } from '@/components/feedback/page-loader';
 import { Page } from '@/components/layout/page';
 import { useSignedInAccount } from '@/lib/auth/use-signed-in-account';
-import { CultureFilesCard } from '@/features/transfer/components/culture-files-card';
 import { useCulture } from '@/lib/logbook/get-culture';
 import { useCultureSummary } from '@/lib/logbook/get-culture-summary';
 import { useNow } from '@/lib/use-now';
@@ -15,7 +15,11 @@ import { RiseOverlayCard } from './rise-overlay-card';
 import { RunningRiseCard } from './running-rise-card';
 
 /** One culture: where it stands, this feeding's rise, how it answers to temperature, its history. */
-export function CulturePage({ cultureId }: { cultureId: string }) {
+/**
+ * `extra` is drawn at the end of the page: cards of other features (the route composes them), since
+ * features never import each other.
+ */
+export function CulturePage({ cultureId, extra }: { cultureId: string; extra?: ReactNode }) {
   const account = useSignedInAccount();
   const culture = useCulture(cultureId);
   const summary = useCultureSummary(cultureId);
@@ -54,7 +58,7 @@ export function CulturePage({ cultureId }: { cultureId: string }) {
       {summary.data && <KineticsCard kinetics={summary.data.kinetics} unit={account.temperatureUnit} />}
       <FeedingsTable cultureId={cultureId} account={account} />
       <LineageCard culture={c} />
-      <CultureFilesCard cultureId={cultureId} />
+      {extra}
     </Page>
   );
 }
