@@ -49,9 +49,9 @@ function temperature(c: number, unit: TemperatureUnit): string {
 }
 
 function clock(iso: string, timeZone: string): string {
-  return new Intl.DateTimeFormat('en-GB', { timeZone, hour: '2-digit', minute: '2-digit', hourCycle: 'h23' }).format(
-    new Date(iso),
-  );
+  // With the weekday: an 80 % interval of a long bulk can run past midnight.
+  const format = { timeZone, weekday: 'short', hour: '2-digit', minute: '2-digit', hourCycle: 'h23' } as const;
+  return new Intl.DateTimeFormat('en-GB', format).format(new Date(iso));
 }
 
 function description(step: PlanStep, timeZone: string, unit: TemperatureUnit): string {
