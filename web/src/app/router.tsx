@@ -67,6 +67,23 @@ function createAppRouter() {
                   lazy: async () => ({ Component: (await import('./routes/feeding')).FeedingRoute }),
                 },
                 {
+                  path: 'bench',
+                  children: [
+                    {
+                      index: true,
+                      lazy: async () => ({ Component: (await import('./routes/bench-list')).BenchListRoute }),
+                    },
+                    {
+                      path: 'new',
+                      lazy: async () => ({ Component: (await import('./routes/bench-new')).BenchNewRoute }),
+                    },
+                    {
+                      path: ':id',
+                      lazy: async () => ({ Component: (await import('./routes/bench-plan')).BenchPlanRoute }),
+                    },
+                  ],
+                },
+                {
                   path: 'formulas',
                   children: [
                     {

@@ -1,0 +1,75 @@
+import type {
+  BakePlanView,
+  CheckOffStepRequest,
+  CreateDoughReadingRequest,
+  FinishBakePlanRequest,
+  UpdateBakePlanRequest,
+} from '@peakwise/shared';
+import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { api } from '@/lib/api-client';
+import { benchKeys } from './query-keys';
+
+// The writes on one plan. Each answers with the re-planned view (or nothing), and each refreshes
+// the plan and the list through `benchKeys.all`.
+const path = (id: string, rest = '') => `/plans/${encodeURIComponent(id)}${rest}`;
+
+/** POST /api/plans/:id/steps/:stepId/done → BakePlanView. */
+export const checkOffStep = (id: string, stepId: string, body: CheckOffStepRequest, headers: Record<string, string>) =>
+  api.post<BakePlanView>(path(id, `/steps/${encodeURIComponent(stepId)}/done`), body, headers);
+
+/** DELETE /api/plans/:id/steps/:stepId/done → undo a check-off. */
+export const undoStep = (id: string, stepId: string) =>
+  api.delete<BakePlanView | undefined>(path(id, `/steps/${encodeURIComponent(stepId)}/done`));
+
+/** POST /api/plans/:id/readings. */
+export const createReading = (id: string, body: CreateDoughReadingRequest, headers: Record<string, string>) =>
+  api.post<unknown>(path(id, '/readings'), body, headers);
+
+/** DELETE /api/plans/:id/readings/:readingId. */
+export const deleteReading = (id: string, readingId: string) =>
+  api.delete<unknown>(path(id, `/readings/${encodeURIComponent(readingId)}`));
+
+/** POST /api/plans/:id/finish. */
+export const finishPlan = (id: string, body: FinishBakePlanRequest, headers: Record<string, string>) =>
+  api.post<BakePlanView>(path(id, '/finish'), body, headers);
+
+/** PATCH /api/plans/:id (rename, cancel). */
+export const updatePlan = (id: string, body: UpdateBakePlanRequest) => api.patch<BakePlanView>(path(id), body);
+
+function useRefreshing<V>(fn: (vars: V) => Promise<unknown>) {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: fn,
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: benchKeys.all }),
+  });
+}
+
+type Headers = { headers: Record<string, string> };
+
+export function useCheckOffStep(id: string) {
+  return useRefreshing(({ stepId, body, headers }: { stepId: string; body: CheckOffStepRequest } & Headers) =>
+    checkOffStep(id, stepId, body, headers),
+  );
+}
+
+export function useUndoStep(id: string) {
+  return useRefreshing((stepId: string) => undoStep(id, stepId));
+}
+
+export function useCreateReading(id: string) {
+  return useRefreshing(({ body, headers }: { body: CreateDoughReadingRequest } & Headers) =>
+    createReading(id, body, headers),
+  );
+}
+
+export function useDeleteReading(id: string) {
+  return useRefreshing((readingId: string) => deleteReading(id, readingId));
+}
+
+export function useFinishPlan(id: string) {
+  return useRefreshing(({ body, headers }: { body: FinishBakePlanRequest } & Headers) => finishPlan(id, body, headers));
+}
+
+export function useUpdatePlan(id: string) {
+  return useRefreshing((body: UpdateBakePlanRequest) => updatePlan(id, body));
+}
