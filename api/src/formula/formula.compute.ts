@@ -124,7 +124,12 @@ export function computeFormula(request: ComputeFormulaRequest): FormulaComputed 
         percentOfFinalDoughFlour: l.percentOfFinalDoughFlour,
       };
     }),
-    totalFormula: summary.totalFormula.map((t) => ({ ...t, kind: kindOf(t.kind, t.name) })),
+    // The model names a starter's water "water"; the baker's own lines start with a capital.
+    totalFormula: summary.totalFormula.map((t) => ({
+      ...t,
+      name: t.name === 'water' ? 'Water' : t.name,
+      kind: kindOf(t.kind, t.name),
+    })),
     doughWeightG: summary.doughWeightG,
     totalFlourG: summary.totalFlourG,
     totalWaterG: summary.totalWaterG,

@@ -52,7 +52,7 @@ export function weighLine(line: FormulaIngredient, at: string): WeighedLine {
   if (used === undefined) {
     throw new BakersMathError(
       `${at}.food`,
-      `say what ${line.name} is (a food from the list) or enter your own density in g/mL, so a ${unit} can be weighed`,
+      `to weigh a ${unit} of ${line.name}, choose what it is from the food list or enter your own density in g/mL; or give it in g`,
     );
   }
   const measured = gramsFromMeasure({ amount: line.amount, unit, food: used }, {}, at);

@@ -128,7 +128,11 @@ export function FormulaEditor({ formula, defaultValues, onSaved }: FormulaEditor
           {current ? (
             <FormulaFigures computed={current} view={view} onViewChange={setView} />
           ) : (
-            <Alert severity="info">Add a flour line with its amount to see the baker’s percentages.</Alert>
+            <Alert severity="info">
+              {problems.length > 0
+                ? 'The figures come back once the line named above can be weighed.'
+                : 'Add a flour line with its amount to see the baker’s percentages.'}
+            </Alert>
           )}
           <FormulaCautions cautions={current?.cautions} />
         </Stack>

@@ -102,7 +102,9 @@ export function FormulaFigures({ computed: c, view, onViewChange }: FormulaFigur
               <TableRow>
                 <TableCell>{total ? 'Total formula' : 'Into the mixer'}</TableCell>
                 <TableCell align="right">Weight</TableCell>
-                <TableCell align="right">Baker’s %</TableCell>
+                <TableCell align="right" sx={{ whiteSpace: 'nowrap', pr: 0 }}>
+                  Baker’s %
+                </TableCell>
               </TableRow>
             </TableHead>
             <TableBody>
