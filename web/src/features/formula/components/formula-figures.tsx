@@ -100,7 +100,7 @@ export function FormulaFigures({ computed: c, view, onViewChange }: FormulaFigur
           <Table size="small" aria-label={total ? 'Total formula' : 'Final dough'}>
             <TableHead>
               <TableRow>
-                <TableCell>{total ? 'Total formula' : 'Into the mixer'}</TableCell>
+                <TableCell sx={{ pl: 0 }}>{total ? 'Total formula' : 'Into the mixer'}</TableCell>
                 <TableCell align="right">Weight</TableCell>
                 <TableCell align="right" sx={{ whiteSpace: 'nowrap', pr: 0 }}>
                   Baker’s %
