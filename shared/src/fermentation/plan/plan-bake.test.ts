@@ -239,3 +239,37 @@ describe('planBake: cautions from the formula', () => {
     expect(step(option(milk, 'overnight-retard'), 'retard').cautions).toEqual([]);
   });
 });
+
+describe('planBake: a few minutes late rather than nothing', () => {
+  // Quiet 23:00–06:30, ready at 09:00: 45 min preheat + 50 min bake + 60 min cooling [the
+  // planner's common-practice defaults] need the oven lit at 06:25, five minutes inside the quiet
+  // hours. The nearest ready time that fits is 09:05.
+  const plan = planBake(
+    input({
+      now: '2026-12-04T08:00:00+01:00',
+      readyAt: '2026-12-05T09:00:00+01:00',
+      quietHours: { from: '23:00', until: '06:30' },
+    }),
+  );
+  const retard = option(plan, 'overnight-retard');
+
+  it('offers the retard ready at 09:05 and says why it is late', () => {
+    expect(retard.fits).toBe(true);
+    expect(retard.readyAt).toBe('2026-12-05T09:05:00+01:00');
+    expect(step(retard, 'cool').endAt).toBe(retard.readyAt);
+    expect(retard.timing?.readyAt).toBe(retard.readyAt);
+    expect(retard.warnings[0]).toMatch(/5 min after the time asked for/);
+    for (const s of retard.steps.filter((x) => x.action)) expect(inQuiet(s, 23 * 60, 6 * 60 + 30), s.id).toBe(false);
+    expect(plan.recommended).toBe('overnight-retard');
+  });
+
+  it('keeps "ready at" itself when it can be met', () => {
+    const onTime = planBake(
+      input({ readyAt: '2026-12-05T10:00:00+01:00', quietHours: { from: '23:00', until: '06:30' } }),
+    );
+    const r = option(onTime, 'overnight-retard');
+    expect(r.fits).toBe(true);
+    expect(r.readyAt).toBe('2026-12-05T10:00:00+01:00');
+    expect(r.warnings.join(' ')).not.toMatch(/after the time asked for/);
+  });
+});

@@ -4,7 +4,7 @@
 // temperature that would make it fit.
 import { type BulkEstimate } from '../bulk/types.js';
 import { MS_PER_HOUR } from '../temperature/time.js';
-import { DEFAULTS } from './defaults.js';
+import { DEFAULTS, GRID_MINUTES } from './defaults.js';
 import { starterPeakHours } from './durations.js';
 import { clock, formatSteps, quietClashReason, stepName } from './format.js';
 import { findRetardLever, findTemperatureLever, type LeverFound } from './plan-lever.js';
@@ -73,10 +73,37 @@ function toOption(plan: ResolvedPlan, kind: PlanOptionKind, s: Solution, quiet: 
   };
 }
 
+/**
+ * "Ready at 09:00" often misses by minutes only (the oven may not be lit before quiet hours end);
+ * a baker would rather eat at 09:05 than be told nothing fits. So when an option cannot be ready
+ * in time, the nearest later ready time on the 5-minute grid, up to this far, is offered instead
+ * (our own limit: past an hour it is another plan, not the one asked for).
+ */
+export const LATE_READY_MAX_MINUTES = 60;
+
+function lateOption(ctx: ScheduleContext, kind: PlanOptionKind, quiet: readonly Interval[]): PlanOption | null {
+  const { plan } = ctx;
+  if (plan.readyAtMs === null) return null;
+  for (let late = GRID_MINUTES; late <= LATE_READY_MAX_MINUTES; late += GRID_MINUTES) {
+    const later: ResolvedPlan = { ...plan, readyAtMs: plan.readyAtMs + late * 60_000 };
+    const found = solveOption({ ...ctx, plan: later }, kind, { quiet, respectNow: true, doughC: null });
+    if (!found) continue;
+    const option = toOption(later, kind, found, quiet);
+    option.warnings.unshift(
+      `ready at ${clock(later.readyAtMs ?? 0, plan.timeZone)}, ${late} min after the time asked for: ` +
+        `${clock(plan.readyAtMs, plan.timeZone)} would put a hands-on step inside quiet hours`,
+    );
+    return option;
+  }
+  return null;
+}
+
 function planOption(ctx: ScheduleContext, kind: PlanOptionKind, quiet: readonly Interval[]) {
   const { plan } = ctx;
   const found = solveOption(ctx, kind, { quiet, respectNow: true, doughC: null });
   if (found) return { option: toOption(plan, kind, found, quiet), attempt: found.timeline };
+  const late = lateOption(ctx, kind, quiet);
+  if (late) return { option: late, attempt: null };
   let attempt = solveOption(ctx, kind, { quiet, respectNow: true, doughC: null, bestEffort: true });
   let reason: string | null = attempt ? quietClashReason(plan, attempt.timeline.steps, quiet) : null;
   if (!attempt) {
@@ -124,8 +151,13 @@ export function planBake(input: PlanInput): BakePlan {
   const sameDay = planOption(ctx, 'same-day', quiet);
   const retard = planOption(ctx, 'overnight-retard', quiet);
   const options = [sameDay.option, retard.option];
-  const asked = options.find((o) => o.kind === plan.requested);
-  const recommended = (asked?.fits ? asked : options.find((o) => o.fits))?.kind ?? null;
+  // The option asked for, if it fits in time; else one that does; else the nearest late one.
+  const onTime = (o: PlanOption): boolean =>
+    o.fits && (plan.readyAtMs === null || o.readyAt === null || Date.parse(o.readyAt) <= plan.readyAtMs + 60_000);
+  const byPreference = [...options].sort(
+    (a, b) => Number(b.kind === plan.requested) - Number(a.kind === plan.requested),
+  );
+  const recommended = (byPreference.find(onTime) ?? byPreference.find((o) => o.fits))?.kind ?? null;
 
   let temperatureLever: BakePlan['temperatureLever'] = null;
   if (!sameDay.option.fits && sameDay.attempt) {

@@ -73,9 +73,11 @@ describe('planBake across a DST change', () => {
     const preheat = step(fits ?? { steps: [] }, 'preheat');
     expect(preheat.startAt).toMatch(/^2026-03-29T06:\d\d:00\+02:00$/);
     expect(ms(preheat.startAt)).toBeLessThan(ms('2026-03-29T05:00:00Z'));
-    // Ready 08:30 CEST: the preheat would start at 05:55 CEST, inside quiet hours.
+    // Ready 08:30 CEST: the preheat would start at 05:55 CEST, inside quiet hours; the nearest
+    // ready time that fits is 08:35 CEST (preheat from 06:00 CEST), not 07:35 or 09:35.
     const early = plan('2026-03-29T08:30:00+02:00').options.find((o) => o.kind === 'overnight-retard');
-    expect(early?.fits).toBe(false);
-    expect(early?.reason).toMatch(/preheating at 05:55 on 2026-03-29 falls inside quiet hours 23:00–06:00/);
+    expect(early?.fits).toBe(true);
+    expect(early?.readyAt).toBe('2026-03-29T08:35:00+02:00');
+    expect(step(early ?? { steps: [] }, 'preheat').startAt).toBe('2026-03-29T06:00:00+02:00');
   });
 });
