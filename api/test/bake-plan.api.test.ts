@@ -93,6 +93,31 @@ describe('POST /api/plans/preview', () => {
     expect(view.live.steps.map((s) => s.id)).toEqual(expect.arrayContaining(['retard', 'take-out', 'bake']));
   });
 
+  it('a plan may follow the temperature lever: a warmer spot makes the same-day plan fit', async () => {
+    const formula = await createFormula(call);
+    const body = {
+      formulaId: formula.id,
+      mode: 'ready-at',
+      readyAt: '2026-11-20T20:00:00+01:00',
+      quietHours: { from: '22:00', until: '06:00' },
+      doughTemperatureC: 22,
+      starter: { skipFeeding: true },
+    };
+    const { plan } = await created<BakePlanPreview>(call('POST', '/api/plans/preview', body), 200);
+    expect(plan.options.every((o) => !o.fits)).toBe(true);
+    const lever = plan.temperatureLever!;
+    expect(lever.doughTemperatureC).toBeGreaterThan(22);
+    expectFieldErrors(await call('POST', '/api/plans', { ...body, option: 'same-day' }), ['option']);
+    const retard = { ...body, option: 'overnight-retard', useTemperatureLever: true };
+    expectFieldErrors(await call('POST', '/api/plans', retard), ['useTemperatureLever']);
+    const view = await created<BakePlanView>(
+      call('POST', '/api/plans', { ...body, option: 'same-day', useTemperatureLever: true }),
+    );
+    expect(view.timing).toEqual(lever.option.timing);
+    expect(step(view.live, 'bulk').temperatureC).toBe(lever.doughTemperatureC);
+    expect(Date.parse(view.live.readyAt!)).toBe(Date.parse(body.readyAt));
+  });
+
   it("uses the culture's own kinetics when its feedings show peaks, and says so", async () => {
     const formula = await createFormula(call);
     const { culture } = await cultureWithPeaks(call);

@@ -16,7 +16,7 @@ import {
 } from '@peakwise/shared';
 import { Omittable } from '../../common/dto-helpers.js';
 import { Clearable, IsMeasure } from '../../common/log-fields.js';
-import { NotForProofKind, ReadyAtForMode } from './final-proof.validator.js';
+import { NotForProofKind, ReadyAtForMode } from './plan-validators.js';
 import {
   ClockTime,
   Nested,
@@ -44,7 +44,7 @@ export class FeedRatioDto implements FeedRatio {
 }
 
 export class PlanStarterDto implements PlanStarter {
-  @Nested(() => FeedRatioDto, false, 'Levain feeding in parts; default 1 : 2 : 2')
+  @Nested(() => FeedRatioDto, 'Levain feeding in parts; default 1 : 2 : 2')
   ratio?: FeedRatioDto;
 
   @OptionalNumber(...DOUGH_C, '°C', 'Where the levain rises; default the dough temperature')

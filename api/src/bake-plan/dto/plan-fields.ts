@@ -47,14 +47,9 @@ export function OptionalBoolean(description?: string) {
   );
 }
 
-/** A nested object, validated field by field (errors named like `steps.folds.sets`). */
-export function Nested(type: () => new () => object, required = false, description?: string) {
-  return applyDecorators(
-    required ? ApiProperty({ type, description }) : ApiPropertyOptional({ type, description }),
-    ...(required ? [] : [Omittable()]),
-    ValidateNested(),
-    Type(type),
-  );
+/** An optional nested object, validated field by field (errors named like `steps.folds.sets`). */
+export function Nested(type: () => new () => object, description?: string) {
+  return applyDecorators(ApiPropertyOptional({ type, description }), Omittable(), ValidateNested(), Type(type));
 }
 
 /** One of a list; document it with ApiProperty beside it (required or not). */
