@@ -34,7 +34,7 @@ export type BakePlanStatus = (typeof BAKE_PLAN_STATUSES)[number];
 /** What the baker chooses on the "new plan" form; stored as given. */
 export interface BakePlanSettings {
   mode: PlanMode;
-  /** Bread ready to eat, ISO 8601 with offset; required for mode "ready-at". */
+  /** Bread ready to eat, ISO 8601 with offset: required for "ready-at" (ahead, within the days above), left out for "start-now". */
   readyAt?: string;
   /** The baker's night or other hours without hands-on steps; null = none. */
   quietHours?: QuietHours | null;
@@ -81,20 +81,24 @@ export interface DoughReading {
   createdAt: string;
 }
 
-/** POST /api/plans/:id/readings — at least one of temperatureC and risePct. */
+/** POST /api/plans/:id/readings → 201 DoughReading — at least one of temperatureC and risePct. */
 export interface CreateDoughReadingRequest {
   takenAt: string;
   temperatureC?: number;
   risePct?: number;
 }
 
-/** POST /api/plans/:id/steps/:stepId/done — times default to now (the step took no time). */
+/**
+ * POST /api/plans/:id/steps/:stepId/done → 201 CheckedStep. Neither time: done now, taking no time;
+ * startedAt only: it took its planned length; endedAt only: it took no time. Again for the same
+ * step: the new times replace the old.
+ */
 export interface CheckOffStepRequest {
   startedAt?: string;
   endedAt?: string;
 }
 
-/** A step checked off, as stored. */
+/** A step checked off, as stored; `endedAt` null: the step took its planned length from `startedAt`. */
 export interface CheckedStep {
   stepId: string;
   startedAt: string;
