@@ -1,6 +1,8 @@
 import type {
   BakePlanView,
+  CheckedStep,
   CheckOffStepRequest,
+  DoughReading,
   CreateDoughReadingRequest,
   FinishBakePlanRequest,
   UpdateBakePlanRequest,
@@ -9,27 +11,27 @@ import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { api } from '@/lib/api-client';
 import { benchKeys } from './query-keys';
 
-// The writes on one plan. Each answers with the re-planned view (or nothing), and each refreshes
-// the plan and the list through `benchKeys.all`.
+// The writes on one plan. Each refreshes the plan (re-planned by the server on read) and the list
+// through `benchKeys.all`.
 const path = (id: string, rest = '') => `/plans/${encodeURIComponent(id)}${rest}`;
 
-/** POST /api/plans/:id/steps/:stepId/done → BakePlanView. */
+/** POST /api/plans/:id/steps/:stepId/done → 201 CheckedStep. */
 export const checkOffStep = (id: string, stepId: string, body: CheckOffStepRequest, headers: Record<string, string>) =>
-  api.post<BakePlanView>(path(id, `/steps/${encodeURIComponent(stepId)}/done`), body, headers);
+  api.post<CheckedStep>(path(id, `/steps/${encodeURIComponent(stepId)}/done`), body, headers);
 
-/** DELETE /api/plans/:id/steps/:stepId/done → undo a check-off. */
+/** DELETE /api/plans/:id/steps/:stepId/done → 204, the check-off undone. */
 export const undoStep = (id: string, stepId: string) =>
-  api.delete<BakePlanView | undefined>(path(id, `/steps/${encodeURIComponent(stepId)}/done`));
+  api.delete<void>(path(id, `/steps/${encodeURIComponent(stepId)}/done`));
 
-/** POST /api/plans/:id/readings. */
+/** POST /api/plans/:id/readings → 201 DoughReading. */
 export const createReading = (id: string, body: CreateDoughReadingRequest, headers: Record<string, string>) =>
-  api.post<unknown>(path(id, '/readings'), body, headers);
+  api.post<DoughReading>(path(id, '/readings'), body, headers);
 
-/** DELETE /api/plans/:id/readings/:readingId. */
+/** DELETE /api/plans/:id/readings/:readingId → 204. */
 export const deleteReading = (id: string, readingId: string) =>
-  api.delete<unknown>(path(id, `/readings/${encodeURIComponent(readingId)}`));
+  api.delete<void>(path(id, `/readings/${encodeURIComponent(readingId)}`));
 
-/** POST /api/plans/:id/finish. */
+/** POST /api/plans/:id/finish → BakePlanView (finishing again edits the record). */
 export const finishPlan = (id: string, body: FinishBakePlanRequest, headers: Record<string, string>) =>
   api.post<BakePlanView>(path(id, '/finish'), body, headers);
 

@@ -50,6 +50,7 @@ export function StepRow({ step, current, clock, now, unit, fullCautions, control
       component="li"
       data-testid="plan-step"
       data-step={step.id}
+      data-done={step.done ? 'true' : 'false'}
       aria-current={current ? 'step' : undefined}
       sx={{
         display: 'grid',

@@ -1,0 +1,154 @@
+import { readFile } from 'node:fs/promises';
+import { join } from 'node:path';
+import type { Page } from 'playwright-core';
+import { afterEach, beforeEach, describe, expect, it } from 'vitest';
+import { baseUrl, DESKTOP, launchBrowser, PHONE, RESULTS_DIR, uniqueEmail, type Browser } from './browser';
+
+const PASSWORD = 'levain peaks before the mix';
+const ZONE = 'Europe/Berlin';
+
+async function signUp(page: Page, base: string) {
+  await page.goto(`${base}/sign-up`);
+  await page.getByLabel('Your name').fill('Theo Park');
+  await page.getByLabel('E-mail').fill(uniqueEmail('theo'));
+  await page.getByLabel('Password', { exact: true }).fill(PASSWORD);
+  await page.getByRole('button', { name: 'Create account' }).click();
+  await page.waitForURL(`${base}/`);
+}
+
+/** The whole page on a phone as tall as it, so the fixed bars sit where they belong. */
+async function tallShot(page: Page, name: string) {
+  const height = await page.evaluate(() => document.documentElement.scrollHeight);
+  await page.setViewportSize({ width: PHONE.width, height });
+  await page.screenshot({ path: join(RESULTS_DIR, name) });
+  await page.setViewportSize(PHONE);
+}
+
+/** Tomorrow's date in `zone`, "YYYY-MM-DD" (en-CA writes dates that way). */
+function tomorrowIn(zone: string): string {
+  const today = new Date().toLocaleDateString('en-CA', { timeZone: zone });
+  const [y, m, d] = today.split('-').map(Number) as [number, number, number];
+  return new Date(Date.UTC(y, m - 1, d + 1)).toISOString().slice(0, 10);
+}
+
+describe('Bench on a phone', () => {
+  const base = baseUrl();
+  let browser: Browser;
+  let page: Page;
+
+  beforeEach(async () => {
+    browser = await launchBrowser(PHONE);
+    page = await browser.context.newPage();
+  });
+
+  afterEach(async () => {
+    await browser.close();
+  });
+
+  it('plans ready-at tomorrow 09:00 around quiet hours, follows the overnight retard, checks off, logs, exports', async () => {
+    await signUp(page, base);
+    // The baker lives in Berlin while the browser runs in another zone: times follow the account.
+    const zone = await page.request.patch(`${base}/api/account`, { data: { timeZone: ZONE } });
+    expect(zone.status()).toBe(200);
+    const formula = await page.request.post(`${base}/api/formulas`, {
+      headers: { 'Idempotency-Key': crypto.randomUUID() },
+      data: {
+        name: 'Country loaf 75 %',
+        ingredients: [
+          { kind: 'flour', name: 'Bread flour', amount: 1000, unit: 'g' },
+          { kind: 'water', name: 'Water', amount: 750, unit: 'g' },
+          { kind: 'starter', name: 'Levain', amount: 200, unit: 'g' },
+          { kind: 'salt', name: 'Salt', amount: 20, unit: 'g' },
+        ],
+      },
+    });
+    expect(formula.status()).toBe(201);
+    await page.reload();
+
+    await page.getByTestId('bottom-nav').getByRole('link', { name: 'Bench' }).click();
+    await page.waitForURL(`${base}/bench`);
+    await page.getByText('Nothing on the bench').waitFor();
+    await page.getByRole('link', { name: 'Plan a bake' }).click();
+    await page.waitForURL(`${base}/bench/new`);
+
+    // The only formula is picked; ready at tomorrow 09:00 in Berlin; quiet 23:00–06:30.
+    await expect.poll(() => page.getByLabel('Formula').inputValue()).not.toBe('');
+    expect(await page.getByLabel('Bread ready at').inputValue()).toBe(`${tomorrowIn(ZONE)}T09:00`);
+    expect(await page.getByLabel('Quiet from').inputValue()).toBe('23:00');
+    expect(await page.getByLabel('Until').inputValue()).toBe('06:30');
+    await tallShot(page, 'bench-new.png');
+
+    await page.getByRole('button', { name: 'Show times' }).click();
+    const overnight = page.getByTestId('option-overnight-retard');
+    await overnight.waitFor();
+    await overnight.getByText(/^Fits/).waitFor();
+    // The retard's steps are laid out in clock times: shaping today, the bake tomorrow.
+    expect(await overnight.getByText('Cold retard in the fridge').count()).toBe(1);
+    expect(await overnight.getByText('Bake', { exact: true }).count()).toBe(1);
+    expect(await page.getByTestId('option-same-day').count()).toBe(1);
+    await overnight.scrollIntoViewIfNeeded();
+    await tallShot(page, 'bench-options.png');
+
+    await overnight.getByRole('button', { name: 'Retard overnight' }).click();
+    await page.waitForURL(/\/bench\/[0-9a-f-]{36}$/);
+    // The route loads lazily: wait for the timeline itself, not just any heading.
+    await page.getByTestId('now-marker').waitFor();
+    const done = page.locator('[data-testid="plan-step"][data-done="true"]');
+    expect(await done.count()).toBe(0);
+    expect(await page.getByTestId('now-marker').count()).toBe(1);
+
+    // Check off the current step twice: the levain's feeding, then the mix. (Waiting steps
+    // before a checked one, like the levain's rise, count as done with it.)
+    const current = page.locator('[data-testid="plan-step"][aria-current="step"]');
+    const isDone = (id: string) =>
+      page.locator(`[data-testid="plan-step"][data-step="${id}"]`).getAttribute('data-done');
+    expect(await current.getAttribute('data-step')).toBe('feed-starter');
+    await current.getByRole('button', { name: 'Done', exact: true }).click();
+    await expect.poll(() => isDone('feed-starter')).toBe('true');
+    await expect.poll(() => current.getAttribute('data-step')).toBe('mix');
+    await current.getByRole('button', { name: 'Done', exact: true }).click();
+    await expect.poll(() => isDone('mix')).toBe('true');
+    expect(await current.getAttribute('data-step')).not.toBe('mix');
+
+    // Undo takes the mix back; Done again records it.
+    await page.locator('[data-step="mix"]').getByRole('button', { name: 'Undo' }).click();
+    await expect.poll(() => isDone('mix')).toBe('false');
+    expect(await current.getAttribute('data-step')).toBe('mix');
+    await current.getByRole('button', { name: 'Done', exact: true }).click();
+    await expect.poll(() => isDone('mix')).toBe('true');
+
+    // A dough reading: temperature and the aliquot jar's rise.
+    const bulk = page.getByTestId('bulk-card');
+    await bulk.getByLabel('Dough temperature').fill('25.5');
+    await bulk.getByLabel('Jar rise').fill('10');
+    await bulk.getByRole('button', { name: 'Log reading now' }).click();
+    await bulk.getByTestId('dough-reading').first().waitFor();
+    expect(await bulk.getByTestId('dough-reading').first().innerText()).toContain('25.5 °C');
+    await bulk.getByText('From 1 reading of the dough.').waitFor();
+    await tallShot(page, 'bench-live.png');
+
+    // The calendar file: RFC 5545, one event per step.
+    const [download] = await Promise.all([
+      page.waitForEvent('download'),
+      page.getByRole('link', { name: 'Add to calendar (.ics)' }).click(),
+    ]);
+    const ics = await readFile((await download.path()) ?? '', 'utf8');
+    expect(ics).toContain('BEGIN:VCALENDAR');
+    expect(ics.match(/BEGIN:VEVENT/g)?.length ?? 0).toBeGreaterThan(5);
+    expect(download.suggestedFilename()).toMatch(/\.ics$/);
+
+    // The Bench lists it under way with its next step.
+    await page.getByTestId('bottom-nav').getByRole('link', { name: 'Bench' }).click();
+    await page.waitForURL(`${base}/bench`);
+    await page
+      .getByTestId('active-plan')
+      .getByText(/^Next: /)
+      .waitFor();
+
+    await page.setViewportSize(DESKTOP);
+    await page.getByTestId('active-plan').click();
+    await page.waitForURL(/\/bench\/[0-9a-f-]{36}$/);
+    await page.getByTestId('bulk-card').waitFor();
+    await page.screenshot({ path: join(RESULTS_DIR, 'bench-live-desktop.png'), fullPage: true });
+  });
+});
