@@ -49,7 +49,8 @@ export function OptionalBoolean(description?: string) {
 
 /** An optional nested object, validated field by field (errors named like `steps.folds.sets`). */
 export function Nested(type: () => new () => object, description?: string) {
-  return applyDecorators(ApiPropertyOptional({ type, description }), Omittable(), ValidateNested(), Type(type));
+  // The class is declared above its use, so it can be named now (the OpenAPI schema needs its name).
+  return applyDecorators(ApiPropertyOptional({ type: type(), description }), Omittable(), ValidateNested(), Type(type));
 }
 
 /** One of a list; document it with ApiProperty beside it (required or not). */
