@@ -157,7 +157,8 @@ describe('correcting one feeding on a phone', () => {
     await page.getByRole('button', { name: 'Add reading' }).click();
     const readings = page.getByRole('table', { name: 'Temperature readings' });
     await readings.getByText('71.6 °F').waitFor();
-    expect(await page.getByLabel('Temperature', { exact: true }).inputValue()).toBe('');
+    // The form clears once the save has come back; the table may show the row a moment earlier.
+    await expect.poll(() => page.getByLabel('Temperature', { exact: true }).inputValue()).toBe('');
     await page.getByLabel('Temperature', { exact: true }).fill('69.8');
     await page.getByLabel('Taken at').fill(await localInput(page, fedAt + HOUR));
     await page.getByRole('button', { name: 'Add reading' }).click();
