@@ -188,6 +188,9 @@ describe('rename, cancel, finish, delete', () => {
     clock.set(NOW + 30 * HOUR);
     const edited = await created<BakePlanView>(call('POST', `${p}/finish`, { rating: 5, notes: null }), 200);
     expect(edited).toMatchObject({ rating: 5, notes: null, feedingId: feedings[1]!.id, finishedAt: done.finishedAt });
+    // The record keeps the timeline as it stood at the finish, not re-planned at a later now.
+    expect(Date.parse(edited.live.now)).toBe(NOW + 20 * HOUR);
+    expect(edited.live).toEqual(done.live);
     // A finished plan takes no more check-offs and cannot be cancelled.
     expectError(await call('POST', `${p}/steps/mix/done`, {}), 409);
     expectError(await call('PATCH', p, { status: 'cancelled' }), 409);

@@ -67,7 +67,10 @@ export class BakePlanController {
   }
 
   @Get(':id')
-  @ApiOkResponse({ type: BakePlanViewDoc, description: '`live` is re-planned at the time of the request' })
+  @ApiOkResponse({
+    type: BakePlanViewDoc,
+    description: '`live` is re-planned at the time of the request (a closed plan: at its finish or cancel)',
+  })
   @ApiNotFoundResponse({ description: NOT_YOURS })
   get(@CurrentAccount() account: AccountRecord, @IdParam() id: string): Promise<BakePlanView> {
     return this.service.get(account, id);

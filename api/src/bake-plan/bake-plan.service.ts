@@ -142,7 +142,9 @@ export class BakePlanService {
 
   private async view(row: BakePlanRow): Promise<BakePlanView> {
     const [checked, readings] = await Promise.all([this.plans.checkedSteps(row.id), this.plans.readings(row.id)]);
-    return toView(row, checked, readings, this.clock.now());
+    // A closed plan is a record: its timeline stays as it stood when it was finished or cancelled.
+    const at = row.finishedAt ?? row.cancelledAt ?? this.clock.now();
+    return toView(row, checked, readings, at);
   }
 
   async update(account: AccountRecord, id: string, request: UpdateBakePlanRequest): Promise<BakePlanView> {

@@ -132,7 +132,7 @@ export interface BakePlanView {
   /** The chosen option's timing as created. */
   timing: PlanTiming;
   kineticsBasis: 'culture' | 'default';
-  /** Re-planned at the time of the request from the check-offs and readings. */
+  /** Re-planned from the check-offs and readings at the time of the request (once finished or cancelled: at that time). */
   live: LivePlan;
   checked: CheckedStep[];
   readings: DoughReading[];
