@@ -92,7 +92,8 @@ export function BulkCard({ plan, account, clock, now, active }: Props) {
             <>
               <Stack direction="row" spacing={1}>
                 <TextField
-                  label="Dough temperature"
+                  label="Temperature"
+                  helperText="Of the dough"
                   value={temperature}
                   onChange={(e) => setTemperature(e.target.value)}
                   slotProps={{

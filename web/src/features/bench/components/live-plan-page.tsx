@@ -40,8 +40,13 @@ function subtitle(plan: BakePlanView, clock: ClockOptions, now: Date): string {
   return parts.join(' · ');
 }
 
+/** "the retard runs …" → "The retard runs …": the planner's warnings are sentence tails. */
+const sentence = (text: string) => text.charAt(0).toUpperCase() + text.slice(1);
+
 function LivePlan({ plan, account }: { plan: BakePlanView; account: Account }) {
-  const now = useNow();
+  const clientNow = useNow();
+  // The server's re-plan may be a moment ahead of the last tick (a check-off just recorded).
+  const now = new Date(Math.max(clientNow.getTime(), Date.parse(plan.live.now)));
   const clock = { timeZone: account.timeZone, style: clockStyleFor(account.unitSystem) };
   const active = plan.status === 'active';
   const check = useCheckOffStep(plan.id);
@@ -82,6 +87,8 @@ function LivePlan({ plan, account }: { plan: BakePlanView; account: Account }) {
     }
   };
 
+  const upFront = active && (plan.live.bulk.status === 'fermenting' || allDone(plan.live.steps));
+
   return (
     <Page title={plan.name} intro={subtitle(plan, clock, now)}>
       {plan.status === 'cancelled' && <Alert severity="info">This plan was cancelled.</Alert>}
@@ -101,7 +108,7 @@ function LivePlan({ plan, account }: { plan: BakePlanView; account: Account }) {
       {active &&
         plan.live.warnings.map((w) => (
           <Alert key={w} severity="warning">
-            {w}
+            {sentence(w)}
           </Alert>
         ))}
       {error && (
@@ -124,7 +131,8 @@ function LivePlan({ plan, account }: { plan: BakePlanView; account: Account }) {
             />
           </CardContent>
         </Card>
-        <Stack spacing={3} sx={{ flex: { md: '1 1 40%' }, minWidth: 0 }}>
+        {/* On a phone, the bulk card (readings) and the finish form come before the long timeline while they matter. */}
+        <Stack spacing={3} sx={{ flex: { md: '1 1 40%' }, minWidth: 0, order: { xs: upFront ? -1 : 0, md: 0 } }}>
           {active && allDone(plan.live.steps) && (
             <FinishForm plan={plan} clock={clock} now={now} unitSystem={account.unitSystem} />
           )}

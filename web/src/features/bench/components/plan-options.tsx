@@ -74,7 +74,7 @@ function OptionCard(props: {
           {option.steps.length > 0 && <OptionTimeline steps={option.steps} clock={clock} now={now} />}
           {option.warnings.map((w) => (
             <Alert key={w} severity="warning">
-              {w}
+              {w.charAt(0).toUpperCase() + w.slice(1)}
             </Alert>
           ))}
           {option.fits && props.choose}

@@ -37,12 +37,12 @@ export function temperatureRole(kind: PlanStepKind): 'dough' | 'fridge' | 'oven'
 export function uncertaintyWords(source: NonNullable<PlanStep['uncertainty']>['source']): string {
   switch (source) {
     case 'starter-peak':
-      return 'levain peak';
+      return 'Levain peaks';
     case 'bulk-end':
-      return 'bulk ends';
+      return 'Bulk ends';
     case 'final-proof':
-      return 'proof ends';
+      return 'Proof ends';
     case 'bake-time':
-      return 'bake time';
+      return 'Bake ends';
   }
 }
