@@ -1,6 +1,6 @@
 import { readFile } from 'node:fs/promises';
 import { join } from 'node:path';
-import type { Page } from 'playwright-core';
+import type { Locator, Page } from 'playwright-core';
 import { afterEach, beforeEach, describe, expect, it } from 'vitest';
 import { baseUrl, DESKTOP, launchBrowser, PHONE, RESULTS_DIR, uniqueEmail, type Browser } from './browser';
 
@@ -17,11 +17,27 @@ async function signUp(page: Page, base: string) {
 }
 
 /** The whole page on a phone as tall as it, so the fixed bars sit where they belong. */
-async function tallShot(page: Page, name: string) {
+async function tallShot(page: Page, name: string, only?: Locator) {
   const height = await page.evaluate(() => document.documentElement.scrollHeight);
   await page.setViewportSize({ width: PHONE.width, height });
-  await page.screenshot({ path: join(RESULTS_DIR, name) });
+  const clip = only ? await only.boundingBox() : null;
+  await page.screenshot({ path: join(RESULTS_DIR, name), ...(clip ? { clip } : {}) });
   await page.setViewportSize(PHONE);
+}
+
+/** `date` on the wall clock of `zone`, "YYYY-MM-DDTHH:MM", as a datetime-local field takes it. */
+function wallIn(zone: string, date: Date): string {
+  const parts = new Intl.DateTimeFormat('en-CA', {
+    timeZone: zone,
+    hourCycle: 'h23',
+    year: 'numeric',
+    month: '2-digit',
+    day: '2-digit',
+    hour: '2-digit',
+    minute: '2-digit',
+  }).formatToParts(date);
+  const get = (type: string) => parts.find((p) => p.type === type)?.value ?? '';
+  return `${get('year')}-${get('month')}-${get('day')}T${get('hour')}:${get('minute')}`;
 }
 
 /** Tomorrow's date in `zone`, "YYYY-MM-DD" (en-CA writes dates that way). */
@@ -86,9 +102,7 @@ describe('Bench on a phone', () => {
     expect(await overnight.getByText('Cold retard in the fridge').count()).toBe(1);
     expect(await overnight.getByText('Bake', { exact: true }).count()).toBe(1);
     expect(await page.getByTestId('option-same-day').count()).toBe(1);
-    await page.locator('section[aria-labelledby="options-heading"]').screenshot({
-      path: join(RESULTS_DIR, 'bench-options.png'),
-    });
+    await tallShot(page, 'bench-options.png', page.locator('section[aria-labelledby="options-heading"]'));
 
     await overnight.getByRole('button', { name: 'Retard overnight' }).click();
     await page.waitForURL(/\/bench\/[0-9a-f-]{36}$/);
@@ -111,12 +125,18 @@ describe('Bench on a phone', () => {
     await expect.poll(() => isDone('mix')).toBe('true');
     expect(await current.getAttribute('data-step')).not.toBe('mix');
 
-    // Undo takes the mix back; Done again records it.
+    // Undo takes the mix back; the baker really mixed 40 minutes ago and says so.
     await page.locator('[data-step="mix"]').getByRole('button', { name: 'Undo' }).click();
     await expect.poll(() => isDone('mix')).toBe('false');
     expect(await current.getAttribute('data-step')).toBe('mix');
-    await current.getByRole('button', { name: 'Done', exact: true }).click();
+    const mixedAt = new Date(Date.now() - 40 * 60_000);
+    await current.getByRole('button', { name: 'Done at another time…' }).click();
+    const dialog = page.getByRole('dialog', { name: 'When did you do it?' });
+    await dialog.getByLabel('Mix the dough').fill(wallIn(ZONE, mixedAt));
+    await dialog.getByRole('button', { name: 'Record' }).click();
     await expect.poll(() => isDone('mix')).toBe('true');
+    const mixTime = mixedAt.toLocaleTimeString('en-GB', { timeZone: ZONE, hour: '2-digit', minute: '2-digit' });
+    expect(await page.locator('[data-step="mix"]').innerText()).toContain(`Done at ${mixTime}`);
 
     // A dough reading: temperature and the aliquot jar's rise.
     const bulk = page.getByTestId('bulk-card');
@@ -145,6 +165,7 @@ describe('Bench on a phone', () => {
       .getByTestId('active-plan')
       .getByText(/^Next: /)
       .waitFor();
+    await tallShot(page, 'bench-list.png');
 
     await page.setViewportSize(DESKTOP);
     await page.getByTestId('active-plan').click();
@@ -176,5 +197,10 @@ describe('Bench on a phone', () => {
     await page.getByText('Open crumb, crust a shade dark.').waitFor();
     expect(await page.getByRole('button', { name: 'Done', exact: true }).count()).toBe(0);
     await tallShot(page, 'bench-finished.png');
+
+    // Finished, it moves from "Under way" to the past bakes.
+    await page.getByTestId('bottom-nav').getByRole('link', { name: 'Bench' }).click();
+    await page.getByTestId('past-plan').waitFor();
+    expect(await page.getByTestId('active-plan').count()).toBe(0);
   });
 });

@@ -24,7 +24,7 @@ interface Props {
 /** The plan top to bottom with the now-marker; the current step carries "Done", the last done one "Undo". */
 export function LiveTimeline({ plan, clock, now, unit, active, busyStep, onDone, onUndo }: Props) {
   const steps = plan.live.steps;
-  const undoable = active ? lastDoneStep(steps) : null;
+  const undoable = active ? lastDoneStep(steps, plan.checked) : null;
   // Each caution in full where it first applies; later steps name it briefly.
   const seen = new Set<string>();
   const fullAt = new Map<string, Set<string>>();

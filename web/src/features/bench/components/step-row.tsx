@@ -98,8 +98,6 @@ export function StepRow({ step, current, clock, now, unit, fullCautions, control
             fontWeight: step.action ? 500 : 400,
             fontSize: current ? '1.125rem' : undefined,
             color: muted ? 'text.secondary' : 'text.primary',
-            textDecoration: step.done ? 'line-through' : undefined,
-            textDecorationColor: 'rgba(0,0,0,0.3)',
           }}
         >
           {stepTitle(step)}

@@ -30,7 +30,12 @@ const steps = [
 describe('currentStep', () => {
   it('is the first hands-on step not checked off, passing over waiting steps', () => {
     expect(currentStep(steps)?.id).toBe('fold-2');
-    expect(lastDoneStep(steps)?.id).toBe('fold-1');
+    const checked = [
+      { stepId: 'fold-1', startedAt: '2026-12-03T09:50:00+01:00', endedAt: '2026-12-03T09:55:00+01:00' },
+      { stepId: 'mix', startedAt: '2026-12-03T09:00:00+01:00', endedAt: null },
+    ];
+    expect(lastDoneStep(steps, checked)?.id).toBe('fold-1');
+    expect(lastDoneStep(steps, [])).toBeNull();
     expect(allDone(steps)).toBe(false);
   });
 

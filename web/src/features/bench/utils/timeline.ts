@@ -1,4 +1,4 @@
-import type { PlanStep } from '@peakwise/shared';
+import type { CheckedStep, PlanStep } from '@peakwise/shared';
 import { dayKey } from './clock';
 
 /**
@@ -10,14 +10,15 @@ export function currentStep(steps: readonly PlanStep[]): PlanStep | null {
   return steps.find((s) => s.action && !s.done) ?? null;
 }
 
-/** The last step checked off (what "Undo" takes back), by its recorded end or start. */
-export function lastDoneStep(steps: readonly PlanStep[]): PlanStep | null {
-  let best: PlanStep | null = null;
-  for (const s of steps) {
-    if (!s.done) continue;
-    if (!best || Date.parse(s.endAt) >= Date.parse(best.endAt)) best = s;
-  }
-  return best;
+/**
+ * The step "Undo" takes back: the latest check-off by its recorded time. Only steps the baker
+ * checked off count — a wait that passed with them (the levain's rise) has nothing to undo.
+ */
+export function lastDoneStep(steps: readonly PlanStep[], checked: readonly CheckedStep[]): PlanStep | null {
+  let best: CheckedStep | null = null;
+  const at = (c: CheckedStep) => Date.parse(c.endedAt ?? c.startedAt);
+  for (const c of checked) if (!best || at(c) >= at(best)) best = c;
+  return best ? (steps.find((s) => s.id === best.stepId) ?? null) : null;
 }
 
 /** Every hands-on step is checked off: time for the finish form. */
