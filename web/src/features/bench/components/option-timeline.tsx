@@ -27,7 +27,7 @@ export function OptionTimeline({ steps, clock, now }: Props) {
         rowGap: 0.5,
       }}
     >
-      {compactSteps(steps).map(({ step, sets, lastAt }) => {
+      {compactSteps(steps).map(({ step, sets, lastAt, quiet }) => {
         const title =
           sets && sets > 1
             ? `Stretch-and-fold × ${sets} (last ${formatTime(lastAt ?? step.startAt, clock)})`
@@ -50,12 +50,12 @@ export function OptionTimeline({ steps, clock, now }: Props) {
               variant="body2"
               sx={{
                 fontWeight: step.action ? 500 : 400,
-                color: step.inQuietHours ? 'error.main' : step.action ? 'text.primary' : 'text.secondary',
+                color: quiet ? 'error.main' : step.action ? 'text.primary' : 'text.secondary',
                 fontStyle: step.action ? 'normal' : 'italic',
               }}
             >
               {title}
-              {step.inQuietHours && (
+              {quiet && (
                 <>
                   {' '}
                   <NightsStayOutlined sx={{ fontSize: 16, verticalAlign: 'text-bottom' }} aria-hidden /> in quiet hours

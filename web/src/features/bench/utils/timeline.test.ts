@@ -76,6 +76,11 @@ describe('compactSteps', () => {
   it('keeps hands-on steps and the long waits, and folds the sets into one line', () => {
     const out = compactSteps(steps);
     expect(out.map((c) => c.step.id)).toEqual(['mix', 'bulk', 'fold-1', 'shape', 'retard', 'bake']);
-    expect(out[2]).toMatchObject({ sets: 2, lastAt: '2026-12-03T10:15:00+01:00' });
+    expect(out[2]).toMatchObject({ sets: 2, lastAt: '2026-12-03T10:15:00+01:00', quiet: false });
+  });
+
+  it('flags a run of folds when any set falls in quiet hours', () => {
+    const late = steps.map((s) => (s.id === 'fold-2' ? { ...s, inQuietHours: true } : s));
+    expect(compactSteps(late)[2]?.quiet).toBe(true);
   });
 });

@@ -64,6 +64,8 @@ export interface CompactStep {
   /** For a run of folds: how many sets, and when the last one starts. */
   sets?: number;
   lastAt?: string;
+  /** Any step of the line touches quiet hours (for folds: any set). */
+  quiet: boolean;
 }
 
 /** The steps of an option in short: waiting steps out except bulk, proof and retard; folds as one line. */
@@ -75,9 +77,11 @@ export function compactSteps(steps: readonly PlanStep[]): CompactStep[] {
     if (step.kind === 'fold' && prev?.step.kind === 'fold') {
       prev.sets = (prev.sets ?? 1) + 1;
       prev.lastAt = step.startAt;
+      prev.quiet ||= step.inQuietHours;
       continue;
     }
-    out.push(step.kind === 'fold' ? { step, sets: 1, lastAt: step.startAt } : { step });
+    const quiet = step.inQuietHours;
+    out.push(step.kind === 'fold' ? { step, sets: 1, lastAt: step.startAt, quiet } : { step, quiet });
   }
   return out;
 }
