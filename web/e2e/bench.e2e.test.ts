@@ -203,4 +203,52 @@ describe('Bench on a phone', () => {
     await page.getByTestId('past-plan').waitFor();
     expect(await page.getByTestId('active-plan').count()).toBe(0);
   });
+
+  it('offers a warmer spot when a cool kitchen cannot make it the same day', async () => {
+    await signUp(page, base);
+    expect((await page.request.patch(`${base}/api/account`, { data: { timeZone: ZONE } })).status()).toBe(200);
+    const formula = await page.request.post(`${base}/api/formulas`, {
+      headers: { 'Idempotency-Key': crypto.randomUUID() },
+      data: {
+        name: 'Country loaf 75 %',
+        ingredients: [
+          { kind: 'flour', name: 'Bread flour', amount: 1000, unit: 'g' },
+          { kind: 'water', name: 'Water', amount: 750, unit: 'g' },
+          { kind: 'starter', name: 'Levain', amount: 200, unit: 'g' },
+          { kind: 'salt', name: 'Salt', amount: 20, unit: 'g' },
+        ],
+      },
+    });
+    expect(formula.status()).toBe(201);
+    await page.goto(`${base}/bench/new`);
+    await expect.poll(() => page.getByLabel('Formula').inputValue()).not.toBe('');
+
+    // Ripe levain, no quiet hours, an 18 °C dough and bread wanted 16 h from now: at 18 °C the
+    // bulk alone would run past it (the planner's own lever search decides the spot).
+    await page.getByLabel('My levain is ripe already (no feeding step)').check();
+    await page.getByLabel('Keep my quiet hours free (no hands-on steps)').uncheck();
+    await page.getByLabel('Bread ready at').fill(wallIn(ZONE, new Date(Date.now() + 16 * 3_600_000)));
+    await page.getByLabel('Dough temperature during bulk').fill('18');
+    await page.getByRole('button', { name: 'Show times' }).click();
+
+    const lever = page.getByTestId('option-lever');
+    await lever.waitFor();
+    // The plan that does not fit says why, with its attempt's times folded away until asked for.
+    const sameDay = page.getByTestId('option-same-day');
+    expect(await sameDay.getByText(/^Does not fit/).count()).toBe(1);
+    expect(await sameDay.getByTestId('option-step').count()).toBe(0);
+    await sameDay.getByRole('button', { name: 'Show the times it would need' }).click();
+    expect(await sameDay.getByTestId('option-step').count()).toBeGreaterThan(5);
+    const words = await lever.getByText(/^Put the dough somewhere near/).innerText();
+    const spot = /near ([\d.]+ °C)/.exec(words)?.[1] ?? '';
+    expect(spot).not.toBe('');
+    expect(words).toContain('instead of 18 °C');
+    await tallShot(page, 'bench-lever.png', page.locator('section[aria-labelledby="options-heading"]'));
+
+    await lever.getByRole('button', { name: `Bake the same day at ${spot}` }).click();
+    await page.waitForURL(/\/bench\/[0-9a-f-]{36}$/);
+    // The live plan follows the warmer spot: its bulk runs at that temperature.
+    await page.getByTestId('bulk-card').getByText(`planned dough temperature (${spot})`).waitFor();
+    expect(await page.locator('[data-step="bulk"]').innerText()).toContain(`dough ${spot}`);
+  });
 });

@@ -83,7 +83,7 @@ export function BulkCard({ plan, account, clock, now, active }: Props) {
           <Typography sx={{ fontWeight: 500 }}>{estimateWords(plan, clock, now)}</Typography>
           <Typography variant="body2" color="text.secondary">
             {bulk.readingsUsed === 0
-              ? `No readings yet: estimated at the planned dough temperature (${formatTemperature(plan.settings.doughTemperatureC, tUnit)}).`
+              ? `No readings yet: estimated at the planned dough temperature (${formatTemperature(plan.live.timing.doughTemperatureC ?? plan.settings.doughTemperatureC, tUnit)}).`
               : `From ${bulk.readingsUsed} ${bulk.readingsUsed === 1 ? 'reading' : 'readings'} of the dough.`}
             {pace && ` The dough is rising ${bulk.rateScale.toFixed(1)}× as fast as expected.`}
             {bulk.low && bulk.high && ' The range is where 8 in 10 bulks like this end.'}

@@ -13,7 +13,7 @@ import CardContent from '@mui/material/CardContent';
 import Chip from '@mui/material/Chip';
 import Stack from '@mui/material/Stack';
 import Typography from '@mui/material/Typography';
-import type { ReactNode } from 'react';
+import { useState, type ReactNode } from 'react';
 import { formatWhen, type ClockOptions } from '../utils/clock';
 import { formatSpot } from '../utils/temperature';
 import { OptionTimeline } from './option-timeline';
@@ -46,6 +46,8 @@ function OptionCard(props: {
   choose: ReactNode;
 }) {
   const { option, clock, now } = props;
+  // An option that does not fit keeps its nearest attempt folded away: the reason says enough.
+  const [showAttempt, setShowAttempt] = useState(false);
   return (
     <Card
       data-testid={props.testId}
@@ -71,7 +73,14 @@ function OptionCard(props: {
               Does not fit: {option.reason ?? 'no times work with these settings.'}
             </Typography>
           )}
-          {option.steps.length > 0 && <OptionTimeline steps={option.steps} clock={clock} now={now} />}
+          {option.steps.length > 0 &&
+            (option.fits || showAttempt ? (
+              <OptionTimeline steps={option.steps} clock={clock} now={now} />
+            ) : (
+              <Button size="small" onClick={() => setShowAttempt(true)} sx={{ alignSelf: 'flex-start' }}>
+                Show the times it would need
+              </Button>
+            ))}
           {option.warnings.map((w) => (
             <Alert key={w} severity="warning">
               {w.charAt(0).toUpperCase() + w.slice(1)}
@@ -84,11 +93,16 @@ function OptionCard(props: {
   );
 }
 
-/** The preview's options, the recommended one first, then the temperature lever and the assumptions. */
+/**
+ * The preview's options: what fits first (the recommended one leading), then the warmer or cooler
+ * spot, then what does not fit; the assumptions last, folded.
+ */
 export function PlanOptions({ plan, account, clock, now, basis, onChoose, choosing }: Props) {
   const options = [...plan.options].sort(
     (a, b) => Number(b.kind === plan.recommended) - Number(a.kind === plan.recommended),
   );
+  const fitting = options.filter((o) => o.fits);
+  const notFitting = options.filter((o) => !o.fits);
   const lever = plan.temperatureLever;
   const busy = choosing !== null;
   const chooseButton = (choice: Choice, label: string) => (
@@ -101,6 +115,22 @@ export function PlanOptions({ plan, account, clock, now, basis, onChoose, choosi
     >
       {label}
     </Button>
+  );
+
+  const optionCard = (o: PlanOption) => (
+    <OptionCard
+      key={o.kind}
+      testId={`option-${o.kind}`}
+      title={OPTION_TITLE[o.kind]}
+      option={o}
+      badge={o.kind === plan.recommended ? <Chip size="small" color="secondary" label="Recommended" /> : undefined}
+      clock={clock}
+      now={now}
+      choose={chooseButton(
+        { option: o.kind, useTemperatureLever: false },
+        o.kind === 'same-day' ? 'Bake the same day' : 'Retard overnight',
+      )}
+    />
   );
 
   return (
@@ -118,21 +148,7 @@ export function PlanOptions({ plan, account, clock, now, basis, onChoose, choosi
           Neither option fits. Try a later ready time, shorter quiet hours, or a warmer dough.
         </Alert>
       )}
-      {options.map((o) => (
-        <OptionCard
-          key={o.kind}
-          testId={`option-${o.kind}`}
-          title={OPTION_TITLE[o.kind]}
-          option={o}
-          badge={o.kind === plan.recommended ? <Chip size="small" color="secondary" label="Recommended" /> : undefined}
-          clock={clock}
-          now={now}
-          choose={chooseButton(
-            { option: o.kind, useTemperatureLever: false },
-            o.kind === 'same-day' ? 'Bake the same day' : 'Retard overnight',
-          )}
-        />
-      ))}
+      {fitting.map(optionCard)}
       {lever && (
         <OptionCard
           testId="option-lever"
@@ -158,6 +174,7 @@ export function PlanOptions({ plan, account, clock, now, basis, onChoose, choosi
           )}
         />
       )}
+      {notFitting.map(optionCard)}
       {plan.assumptions.length > 0 && (
         <Accordion disableGutters variant="outlined">
           <AccordionSummary expandIcon={<ExpandMore />}>
