@@ -79,6 +79,19 @@ describe('Bench on a phone', () => {
       },
     });
     expect(formula.status()).toBe(201);
+    // Bramble, fed five hours ago: the feeding that will leaven the bake.
+    const culture = await page.request.post(`${base}/api/cultures`, {
+      headers: { 'Idempotency-Key': crypto.randomUUID() },
+      data: { name: 'Bramble' },
+    });
+    expect(culture.status()).toBe(201);
+    const { id: cultureId } = (await culture.json()) as { id: string };
+    const feeding = await page.request.post(`${base}/api/cultures/${cultureId}/feedings`, {
+      headers: { 'Idempotency-Key': crypto.randomUUID() },
+      data: { fedAt: new Date(Date.now() - 5 * 3_600_000).toISOString(), ratio: '1:2:2', totalG: 100 },
+    });
+    expect(feeding.status()).toBe(201);
+    const { id: feedingId } = (await feeding.json()) as { id: string };
     await page.reload();
 
     await page.getByTestId('bottom-nav').getByRole('link', { name: 'Bench' }).click();
@@ -92,6 +105,7 @@ describe('Bench on a phone', () => {
     expect(await page.getByLabel('Bread ready at').inputValue()).toBe(`${tomorrowIn(ZONE)}T09:00`);
     expect(await page.getByLabel('Quiet from').inputValue()).toBe('23:00');
     expect(await page.getByLabel('Until').inputValue()).toBe('06:30');
+    await page.getByLabel('Culture that leavens it').selectOption({ label: 'Bramble' });
     await tallShot(page, 'bench-new.png');
 
     await page.getByRole('button', { name: 'Show times' }).click();
@@ -192,9 +206,16 @@ describe('Bench on a phone', () => {
     await finish.locator('label').filter({ hasText: '4 Stars' }).click();
     expect(await finish.getByRole('radio', { name: '4 Stars' }).isChecked()).toBe(true);
     await finish.getByLabel('Notes').fill('Open crumb, crust a shade dark.');
+    // The feeding picked for the record is Bramble's, the one before the mix.
+    expect(await finish.getByLabel('The feeding of Bramble that leavened it').inputValue()).toBe(feedingId);
     await finish.getByRole('button', { name: 'Save the bake' }).click();
     await page.getByRole('heading', { name: /^Baked / }).waitFor();
     await page.getByText('Open crumb, crust a shade dark.').waitFor();
+    const record = (await (await page.request.get(`${base}/api/plans/${planId}`)).json()) as {
+      feedingId: string | null;
+      rating: number | null;
+    };
+    expect(record).toMatchObject({ feedingId, rating: 4 });
     expect(await page.getByRole('button', { name: 'Done', exact: true }).count()).toBe(0);
     await tallShot(page, 'bench-finished.png');
 
