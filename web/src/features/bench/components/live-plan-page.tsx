@@ -34,14 +34,24 @@ export function LivePlanPage({ planId }: { planId: string }) {
   return <LivePlan plan={plan.data} account={account} />;
 }
 
-function subtitle(plan: BakePlanView, clock: ClockOptions, now: Date): string {
-  const parts = [plan.formulaName ?? 'Formula deleted', plan.cultureName ?? 'no culture'];
-  if (plan.live.readyAt) parts.push(`ready ${formatWhen(plan.live.readyAt, now, clock)}`);
-  return parts.join(' · ');
-}
-
 /** "the retard runs …" → "The retard runs …": the planner's warnings are sentence tails. */
 const sentence = (text: string) => text.charAt(0).toUpperCase() + text.slice(1);
+
+/** What the name does not say already: the formula, the culture, and a ready time that moved. */
+function subtitle(plan: BakePlanView, clock: ClockOptions, now: Date): string {
+  const parts: string[] = [];
+  if (!plan.formulaName) parts.push('formula deleted');
+  else if (!plan.name.includes(plan.formulaName)) parts.push(plan.formulaName);
+  parts.push(plan.cultureName ? `leavened by ${plan.cultureName}` : 'no culture (typical times)');
+  const ready = plan.live.readyAt;
+  const planned = plan.timing.readyAt;
+  if (ready && plan.status === 'active') {
+    const moved = planned !== null && Math.abs(Date.parse(ready) - Date.parse(planned)) >= 60_000;
+    if (moved) parts.push(`now ready ${formatWhen(ready, now, clock)}`);
+    else if (!/ready/i.test(plan.name)) parts.push(`ready ${formatWhen(ready, now, clock)}`);
+  }
+  return sentence(parts.join(' · '));
+}
 
 function LivePlan({ plan, account }: { plan: BakePlanView; account: Account }) {
   const clientNow = useNow();
