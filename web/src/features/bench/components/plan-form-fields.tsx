@@ -202,6 +202,9 @@ export function PlanFormFields({ control, account, formulas, cultures }: Props) 
             </ToggleButtonGroup>
           )}
         />
+        <Typography variant="body2" color="text.secondary">
+          You will see both ways; the one you pick here comes first when both fit.
+        </Typography>
         {proof === 'room' ? (
           <FormTextField
             control={control}
