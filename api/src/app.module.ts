@@ -14,6 +14,7 @@ import { FeedingModule } from './feeding/feeding.module.js';
 import { FormulaModule } from './formula/formula.module.js';
 import { HealthModule } from './health/health.module.js';
 import { LogbookTransferModule } from './logbook-transfer/logbook-transfer.module.js';
+import { MailModule } from './mail/mail.module.js';
 import { RiseCheckModule } from './rise-check/rise-check.module.js';
 import { TemperatureModule } from './temperature/temperature.module.js';
 
@@ -25,6 +26,7 @@ export class AppModule {
       imports: [
         ConfigModule.forRoot(config),
         DatabaseModule.forRoot(database),
+        MailModule,
         AccountModule,
         AuthModule,
         AdminModule,

@@ -13,6 +13,18 @@ export interface AppConfig {
   authAttemptsPerMinute: number;
   /** Delete expired sessions every this many seconds; 0 turns pruning off (tests). */
   sessionPruneSeconds: number;
+  /** Outgoing mail (api/src/mail/). */
+  mail: MailConfig;
+}
+
+export interface MailConfig {
+  /** SMTP server for outgoing mail; `npm start` runs a fake one (api/src/dev/fake-smtp.main.ts). */
+  smtpUrl: string;
+  from: string;
+  /** Where the app is reached from outside, for links in e-mails; no trailing slash. */
+  publicUrl: string;
+  /** The fake SMTP server's HTTP side, listed at /api/dev/mail; null (always in production) hides that route. */
+  devMailUrl: string | null;
 }
 
 function required(env: NodeJS.ProcessEnv, name: string): string {
@@ -39,7 +51,18 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): AppConfig {
     passwordHashCost,
     sessionPruneSeconds: Number(env.SESSION_PRUNE_SECONDS ?? 900),
     authAttemptsPerMinute: Number(env.AUTH_ATTEMPTS_PER_MINUTE ?? 10),
+    mail: {
+      smtpUrl: env.SMTP_URL || 'smtp://127.0.0.1:2525',
+      from: env.MAIL_FROM || 'Peakwise <no-reply@peakwise.invalid>',
+      publicUrl: (env.PUBLIC_URL || `http://${publicHost(env.HOST)}:${env.PORT ?? 3000}`).replace(/\/+$/, ''),
+      devMailUrl: env.NODE_ENV === 'production' ? null : env.DEV_MAIL_URL || null,
+    },
   };
+}
+
+/** A wildcard listen address is no address to put in a link. */
+function publicHost(host: string | undefined): string {
+  return !host || host === '0.0.0.0' || host === '::' ? '127.0.0.1' : host;
 }
 
 export const APP_CONFIG = Symbol('APP_CONFIG');

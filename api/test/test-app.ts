@@ -32,6 +32,13 @@ export function testConfig(overrides: Partial<AppConfig> = {}): AppConfig {
     sessionPruneSeconds: 0,
     // Suites sign in hundreds of times from one address; throttle.api.test.ts tests the brake.
     authAttemptsPerMinute: 100_000,
+    // Nothing listens on port 9: a test that reads mail starts its own fake (test/mail-fixture.ts).
+    mail: {
+      smtpUrl: 'smtp://127.0.0.1:9',
+      from: 'Peakwise <no-reply@peakwise.invalid>',
+      publicUrl: 'http://127.0.0.1:3000',
+      devMailUrl: 'http://127.0.0.1:9',
+    },
     ...overrides,
   };
 }

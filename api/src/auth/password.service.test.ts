@@ -13,6 +13,7 @@ function service(passwordHashCost: number): PasswordService {
     passwordHashCost,
     sessionPruneSeconds: 0,
     authAttemptsPerMinute: 10,
+    mail: { smtpUrl: 'smtp://127.0.0.1:9', from: 'x@example.com', publicUrl: 'http://127.0.0.1', devMailUrl: null },
   };
   return new PasswordService(config);
 }
