@@ -18,3 +18,7 @@ export * from './contracts/culture-summary.js';
 export * from './contracts/logbook-transfer.js';
 export * from './contracts/formula.js';
 export * from './contracts/bake-plan.js';
+export * from './contracts/alert.js';
+export * from './alerts/index.js';
+export * from './contracts/password-reset.js';
+export * from './contracts/dev-mail.js';

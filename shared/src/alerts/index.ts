@@ -1,0 +1,14 @@
+export { alertSlotKey } from './slot-key.js';
+export type { WantedAlert } from './types.js';
+export {
+  cultureAlerts,
+  readyWindow,
+  FEEDING_ROUTINE_HOURS,
+  PAST_PEAK_STALE_HOURS,
+  FEEDING_DUE_STALE_HOURS,
+  READY_FALLBACK_STALE_HOURS,
+  type CultureAlertInput,
+} from './culture-rules.js';
+export { planAlerts, PLAN_STEP_STALE_MINUTES, type PlanAlertInput } from './plan-rules.js';
+export { deliveryFor, isClockTime, type DeliveryDecision, type DeliveryInput } from './delivery-rules.js';
+export { channelsFor, defaultAlertPreferences, mergeAlertPreferences } from './preferences.js';

@@ -1,0 +1,39 @@
+import {
+  ALERT_KINDS,
+  ALERT_LEAD_MINUTES_DEFAULT,
+  type AlertChannel,
+  type AlertKind,
+  type AlertPreferences,
+  type UpdateAlertPreferencesRequest,
+} from '../contracts/alert.js';
+
+/** Until the baker says otherwise: every kind in the app and by e-mail, no quiet hours; push is not built yet. */
+export function defaultAlertPreferences(): AlertPreferences {
+  const channels = Object.fromEntries(
+    ALERT_KINDS.map((k) => [k, { email: true, push: false }]),
+  ) as AlertPreferences['channels'];
+  return { leadMinutes: ALERT_LEAD_MINUTES_DEFAULT, quietHours: null, channels };
+}
+
+/** The stored preferences with a PATCH applied (fields left out keep their value). */
+export function mergeAlertPreferences(
+  current: AlertPreferences,
+  patch: UpdateAlertPreferencesRequest,
+): AlertPreferences {
+  const channels = { ...current.channels };
+  for (const kind of ALERT_KINDS) {
+    const change = patch.channels?.[kind];
+    if (change) channels[kind] = { ...channels[kind], ...change };
+  }
+  return {
+    leadMinutes: patch.leadMinutes ?? current.leadMinutes,
+    quietHours: patch.quietHours === undefined ? current.quietHours : patch.quietHours,
+    channels,
+  };
+}
+
+/** The channels an alert of `kind` goes to: the app always, then what the baker switched on. */
+export function channelsFor(prefs: AlertPreferences, kind: AlertKind): AlertChannel[] {
+  const choice = prefs.channels[kind];
+  return ['in-app', ...(choice.email ? (['email'] as const) : []), ...(choice.push ? (['push'] as const) : [])];
+}
