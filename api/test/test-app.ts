@@ -70,7 +70,8 @@ export async function createTestApp(
 /** Empties every table the app writes, between tests. */
 export async function resetDatabase(db: Database): Promise<void> {
   await sql`TRUNCATE account, session, culture, feeding, rise_check, temperature_reading, idempotency_key,
-    formula, formula_ingredient, formula_blend_flour, bake_plan, bake_plan_step, dough_reading`.execute(db);
+    formula, formula_ingredient, formula_blend_flour, bake_plan, bake_plan_step, dough_reading,
+    alert, alert_delivery, alert_preference`.execute(db);
 }
 
 /** Every Set-Cookie header of a response that sets (not clears) the session cookie. */

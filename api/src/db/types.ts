@@ -36,6 +36,53 @@ export interface Account {
   updatedAt: Generated<Timestamp>;
 }
 
+export interface Alert {
+  accountId: string;
+  body: string;
+  cancelledAt: Timestamp | null;
+  createdAt: Generated<Timestamp>;
+  cultureId: string | null;
+  dueAt: Timestamp;
+  feedingId: string | null;
+  id: Generated<string>;
+  kind: string;
+  linkPath: string;
+  movedAt: Timestamp | null;
+  planId: string | null;
+  readAt: Timestamp | null;
+  sentAt: Timestamp | null;
+  slotKey: string;
+  staleAt: Timestamp;
+  status: Generated<string>;
+  subjectType: string;
+  title: string;
+  updatedAt: Generated<Timestamp>;
+}
+
+export interface AlertDelivery {
+  alertId: string;
+  attempts: Generated<number>;
+  channel: string;
+  claimedAt: Timestamp | null;
+  createdAt: Generated<Timestamp>;
+  droppedAt: Timestamp | null;
+  id: Generated<string>;
+  lastError: string | null;
+  sendAfter: Timestamp;
+  sentAt: Timestamp | null;
+  updatedAt: Generated<Timestamp>;
+}
+
+export interface AlertPreference {
+  accountId: string;
+  channels: Json;
+  createdAt: Generated<Timestamp>;
+  leadMinutes: number;
+  quietFrom: string | null;
+  quietUntil: string | null;
+  updatedAt: Generated<Timestamp>;
+}
+
 export interface BakePlan {
   accountId: string;
   cancelledAt: Timestamp | null;
@@ -186,6 +233,9 @@ export interface TemperatureReading {
 
 export interface DB {
   account: Account;
+  alert: Alert;
+  alertDelivery: AlertDelivery;
+  alertPreference: AlertPreference;
   bakePlan: BakePlan;
   bakePlanStep: BakePlanStep;
   culture: Culture;
