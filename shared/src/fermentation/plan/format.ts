@@ -52,11 +52,18 @@ export function stepName(kind: PlanStepKind): string {
   return NAMES[kind];
 }
 
-/** "01:10 on 2026-12-05", the local clock in the baker's zone. */
+const WEEKDAYS = ['Sun', 'Mon', 'Tue', 'Wed', 'Thu', 'Fri', 'Sat'] as const;
+const MONTHS = ['Jan', 'Feb', 'Mar', 'Apr', 'May', 'Jun', 'Jul', 'Aug', 'Sep', 'Oct', 'Nov', 'Dec'] as const;
+
+/**
+ * "01:10 on Sat 5 Dec", the local clock in the baker's zone: the words a baker reads in a reason
+ * or a warning (the year is never in doubt within a plan's week).
+ */
 export function clock(ms: number, timeZone: string): string {
   const p = localParts(ms, timeZone);
   const two = (n: number): string => String(n).padStart(2, '0');
-  return `${two(p.hour)}:${two(p.minute)} on ${p.year}-${two(p.month)}-${two(p.day)}`;
+  const weekday = WEEKDAYS[new Date(Date.UTC(p.year, p.month - 1, p.day)).getUTCDay()] ?? '';
+  return `${two(p.hour)}:${two(p.minute)} on ${weekday} ${p.day} ${MONTHS[p.month - 1] ?? ''}`;
 }
 
 /** "dividing and shaping at 01:10 on … and baking at 02:40 on … fall inside quiet hours 23:00–06:30". */

@@ -90,8 +90,8 @@ function lateOption(ctx: ScheduleContext, kind: PlanOptionKind, quiet: readonly 
     if (!found) continue;
     const option = toOption(later, kind, found, quiet);
     option.warnings.unshift(
-      `ready at ${clock(later.readyAtMs ?? 0, plan.timeZone)}, ${late} min after the time asked for: ` +
-        `${clock(plan.readyAtMs, plan.timeZone)} would put a hands-on step inside quiet hours`,
+      `ready at ${clock(later.readyAtMs ?? 0, plan.timeZone)}, ${late} min later than asked: ` +
+        `on time, a hands-on step would fall inside quiet hours`,
     );
     return option;
   }
