@@ -22,5 +22,3 @@ export * from './contracts/alert.js';
 export * from './alerts/index.js';
 export * from './contracts/password-reset.js';
 export * from './contracts/dev-mail.js';
-export * from './contracts/password-reset.js';
-export * from './contracts/dev-mail.js';
