@@ -71,7 +71,7 @@ export async function createTestApp(
 export async function resetDatabase(db: Database): Promise<void> {
   await sql`TRUNCATE account, session, culture, feeding, rise_check, temperature_reading, idempotency_key,
     formula, formula_ingredient, formula_blend_flour, bake_plan, bake_plan_step, dough_reading,
-    alert, alert_delivery, alert_preference`.execute(db);
+    alert, alert_delivery, alert_preference, account_token`.execute(db);
 }
 
 /** Every Set-Cookie header of a response that sets (not clears) the session cookie. */

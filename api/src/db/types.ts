@@ -36,6 +36,16 @@ export interface Account {
   updatedAt: Generated<Timestamp>;
 }
 
+export interface AccountToken {
+  accountId: string;
+  createdAt: Generated<Timestamp>;
+  expiresAt: Timestamp;
+  id: Generated<string>;
+  purpose: string;
+  tokenHash: string;
+  usedAt: Timestamp | null;
+}
+
 export interface Alert {
   accountId: string;
   body: string;
@@ -233,6 +243,7 @@ export interface TemperatureReading {
 
 export interface DB {
   account: Account;
+  accountToken: AccountToken;
   alert: Alert;
   alertDelivery: AlertDelivery;
   alertPreference: AlertPreference;
