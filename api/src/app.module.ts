@@ -10,11 +10,13 @@ import { CultureModule } from './culture/culture.module.js';
 import type { AppConfig } from './config.js';
 import { DatabaseModule } from './db/database.module.js';
 import type { DatabaseHandle } from './db/database.js';
+import { DevMailModule } from './dev/dev-mail.module.js';
 import { FeedingModule } from './feeding/feeding.module.js';
 import { FormulaModule } from './formula/formula.module.js';
 import { HealthModule } from './health/health.module.js';
 import { LogbookTransferModule } from './logbook-transfer/logbook-transfer.module.js';
 import { MailModule } from './mail/mail.module.js';
+import { PasswordResetModule } from './password-reset/password-reset.module.js';
 import { RiseCheckModule } from './rise-check/rise-check.module.js';
 import { TemperatureModule } from './temperature/temperature.module.js';
 
@@ -29,6 +31,9 @@ export class AppModule {
         MailModule,
         AccountModule,
         AuthModule,
+        PasswordResetModule,
+        // Development only: config.ts leaves devMailUrl null in production.
+        ...(config.mail.devMailUrl ? [DevMailModule] : []),
         AdminModule,
         HealthModule,
         CultureModule,
