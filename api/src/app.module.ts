@@ -2,6 +2,7 @@ import { Module, type DynamicModule } from '@nestjs/common';
 import { APP_GUARD } from '@nestjs/core';
 import { AccountModule } from './account/account.module.js';
 import { AdminModule } from './admin/admin.module.js';
+import { AlertModule } from './alert/alert.module.js';
 import { AuthModule } from './auth/auth.module.js';
 import { BakePlanModule } from './bake-plan/bake-plan.module.js';
 import { SessionGuard } from './common/session.guard.js';
@@ -43,6 +44,7 @@ export class AppModule {
         LogbookTransferModule,
         FormulaModule,
         BakePlanModule,
+        AlertModule,
       ],
       providers: [{ provide: APP_GUARD, useClass: SessionGuard }],
     };

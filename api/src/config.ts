@@ -15,6 +15,8 @@ export interface AppConfig {
   sessionPruneSeconds: number;
   /** Outgoing mail (api/src/mail/). */
   mail: MailConfig;
+  /** How often the alert worker polls its queue, seconds (pg-boss, at least 0.5); 2 when left out. */
+  alertPollingSeconds?: number;
 }
 
 export interface MailConfig {
@@ -50,6 +52,7 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): AppConfig {
     logLevel: env.LOG_LEVEL ?? 'info',
     passwordHashCost,
     sessionPruneSeconds: Number(env.SESSION_PRUNE_SECONDS ?? 900),
+    alertPollingSeconds: Number(env.ALERT_POLLING_SECONDS ?? 2),
     authAttemptsPerMinute: Number(env.AUTH_ATTEMPTS_PER_MINUTE ?? 10),
     mail: {
       smtpUrl: env.SMTP_URL || 'smtp://127.0.0.1:2525',

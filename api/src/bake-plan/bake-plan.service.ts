@@ -18,6 +18,7 @@ import {
   type UpdateBakePlanRequest,
 } from '@peakwise/shared';
 import type { AccountRecord } from '../account/account.repository.js';
+import { AlertScheduler } from '../alert/alert.scheduler.js';
 import { fieldError } from '../common/validation.js';
 import { FormulaService } from '../formula/formula.service.js';
 import { calendarFileName, planCalendar } from './bake-plan.calendar.js';
@@ -53,6 +54,7 @@ export class BakePlanService {
     private readonly formulas: FormulaService,
     private readonly kinetics: PlanKineticsSource,
     private readonly clock: BakePlanClock,
+    private readonly alerts: AlertScheduler,
   ) {}
 
   /** The account's plan, or 404 — also for another account's id, so ids reveal nothing. */
@@ -119,6 +121,7 @@ export class BakePlanService {
       kineticsBasis: prepared.kineticsBasis,
       dairyOrEgg: prepared.dough.dairyOrEgg,
     });
+    await this.alerts.refreshPlan(id);
     return this.get(account, id);
   }
 
@@ -157,6 +160,7 @@ export class BakePlanService {
       changes.cancelledAt = this.clock.now();
     }
     await this.plans.update(account.id, id, changes);
+    await this.alerts.refreshPlan(id);
     return this.get(account, id);
   }
 
@@ -175,6 +179,7 @@ export class BakePlanService {
     if (request.rating !== undefined) changes.rating = request.rating;
     if (request.feedingId !== undefined) changes.feedingId = request.feedingId;
     await this.plans.update(account.id, id, changes);
+    await this.alerts.refreshPlan(id);
     return this.get(account, id);
   }
 
@@ -215,12 +220,14 @@ export class BakePlanService {
     if (endedAt !== null && endedAt < startedAt) throw fieldError('endedAt', 'End the step at or after its start.');
     const step = { stepId, startedAt, endedAt };
     await this.plans.checkOff(row.id, step);
+    await this.alerts.refreshPlan(row.id);
     return toCheckedStep(step);
   }
 
   async undoCheckOff(account: AccountRecord, id: string, stepId: string): Promise<void> {
     const row = await this.requireActive(account, id);
     if (!(await this.plans.undoCheckOff(row.id, stepId))) throw new NotFoundException('This step is not checked off.');
+    await this.alerts.refreshPlan(row.id);
   }
 
   async addReading(account: AccountRecord, id: string, request: CreateDoughReadingRequest): Promise<DoughReading> {
@@ -233,6 +240,7 @@ export class BakePlanService {
       temperatureC: request.temperatureC ?? null,
       risePct: request.risePct ?? null,
     });
+    await this.alerts.refreshPlan(row.id);
     return toDoughReading(reading);
   }
 

@@ -8,6 +8,7 @@ import type {
   UpdateCultureRequest,
 } from '@peakwise/shared';
 import type { AccountRecord } from '../account/account.repository.js';
+import { AlertScheduler } from '../alert/alert.scheduler.js';
 import { fieldError } from '../common/validation.js';
 import { toCulture } from './culture.mapper.js';
 import { CultureRepository, type CultureRow, type ParentProblem } from './culture.repository.js';
@@ -22,7 +23,10 @@ const PARENT_PROBLEMS: Record<ParentProblem, string> = {
 
 @Injectable()
 export class CultureService {
-  constructor(private readonly cultures: CultureRepository) {}
+  constructor(
+    private readonly cultures: CultureRepository,
+    private readonly alerts: AlertScheduler,
+  ) {}
 
   /** The account's culture, or 404 — also for another account's id, so ids reveal nothing. */
   async requireOwned(account: AccountRecord, id: string): Promise<CultureRow> {
@@ -53,6 +57,8 @@ export class CultureService {
     const result = await this.cultures.update(account.id, id, changes);
     if (result === 'no-parent' || result === 'cycle') throw fieldError('parentCultureId', PARENT_PROBLEMS[result]);
     if (result === 'not-found') throw new NotFoundException('No culture with this id.');
+    // Location (routine, ready alerts) and archiving change which alerts the culture wants.
+    await this.alerts.refreshCulture(id);
     return this.get(account, id);
   }
 

@@ -7,6 +7,7 @@ import type {
   UpdateFeedingRequest,
 } from '@peakwise/shared';
 import type { AccountRecord } from '../account/account.repository.js';
+import { AlertScheduler } from '../alert/alert.scheduler.js';
 import { fieldError } from '../common/validation.js';
 import { CultureService } from '../culture/culture.service.js';
 import { requestedGrams } from './feeding.amounts.js';
@@ -18,6 +19,7 @@ export class FeedingService {
   constructor(
     private readonly feedings: FeedingRepository,
     private readonly cultures: CultureService,
+    private readonly alerts: AlertScheduler,
   ) {}
 
   /** The account's feeding, or 404 — also for another account's id. */
@@ -46,6 +48,7 @@ export class FeedingService {
       notes: request.notes,
       observations: request.observations,
     });
+    await this.alerts.refreshCulture(cultureId);
     return toFeeding(row);
   }
 
@@ -82,10 +85,14 @@ export class FeedingService {
       notes: request.notes,
       observations: request.observations,
     });
+    await this.alerts.refreshCulture(row.cultureId);
     return toFeeding(row);
   }
 
   async delete(account: AccountRecord, id: string): Promise<void> {
+    const { cultureId } = await this.requireOwned(account, id);
     if (!(await this.feedings.delete(account.id, id))) throw new NotFoundException('No feeding with this id.');
+    // Its alerts went with it (ON DELETE CASCADE); the previous feeding may want some again.
+    await this.alerts.refreshCulture(cultureId);
   }
 }

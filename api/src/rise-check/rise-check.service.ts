@@ -6,6 +6,7 @@ import type {
   UpdateRiseCheckRequest,
 } from '@peakwise/shared';
 import type { AccountRecord } from '../account/account.repository.js';
+import { AlertScheduler } from '../alert/alert.scheduler.js';
 import { requireNotBeforeFeeding } from '../feeding/feeding-time.js';
 import { FeedingService } from '../feeding/feeding.service.js';
 import { toRiseCheck } from './rise-check.mapper.js';
@@ -17,6 +18,7 @@ export class RiseCheckService {
   constructor(
     private readonly checks: RiseCheckRepository,
     private readonly feedings: FeedingService,
+    private readonly alerts: AlertScheduler,
   ) {}
 
   private async requireOwned(account: AccountRecord, id: string): Promise<OwnedRiseCheck> {
@@ -32,6 +34,7 @@ export class RiseCheckService {
     const heightMm = requestedHeightMm(request, feeding.initialHeightMm);
     if (heightMm === undefined) throw new Error('CreateRiseCheckDto let a rise check through without a height');
     const row = await this.checks.insert({ feedingId, takenAt, heightMm, temperatureC: request.temperatureC });
+    await this.alerts.refreshCulture(feeding.cultureId);
     return toRiseCheck(row);
   }
 
@@ -55,6 +58,7 @@ export class RiseCheckService {
       heightMm: requestedHeightMm(request, check.initialHeightMm),
       temperatureC: request.temperatureC,
     });
+    await this.alerts.refreshFeeding(check.feedingId);
     return toRiseCheck(row);
   }
 

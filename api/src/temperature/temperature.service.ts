@@ -5,6 +5,7 @@ import type {
   TemperatureReadingListResponse,
 } from '@peakwise/shared';
 import type { AccountRecord } from '../account/account.repository.js';
+import { AlertScheduler } from '../alert/alert.scheduler.js';
 import { requireNotBeforeFeeding } from '../feeding/feeding-time.js';
 import { FeedingService } from '../feeding/feeding.service.js';
 import { toTemperatureReading } from './temperature.mapper.js';
@@ -15,6 +16,7 @@ export class TemperatureService {
   constructor(
     private readonly readings: TemperatureRepository,
     private readonly feedings: FeedingService,
+    private readonly alerts: AlertScheduler,
   ) {}
 
   async create(
@@ -30,6 +32,7 @@ export class TemperatureService {
     const rows = await this.readings.insertMany(
       request.readings.map((reading) => ({ feedingId, takenAt: reading.takenAt, temperatureC: reading.temperatureC })),
     );
+    await this.alerts.refreshCulture(feeding.cultureId);
     return { items: rows.map(toTemperatureReading) };
   }
 

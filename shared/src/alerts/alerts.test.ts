@@ -164,5 +164,7 @@ describe('preferences', () => {
     expect(p.leadMinutes).toBe(30);
     expect(channelsFor(p, 'past-peak')).toEqual(['in-app']);
     expect(channelsFor(p, 'culture-ready')).toEqual(['in-app', 'email']);
+    const kept = mergeAlertPreferences(p, { channels: { 'past-peak': { email: true, push: undefined } } });
+    expect(kept.channels['past-peak']).toEqual({ email: true, push: false });
   });
 });

@@ -23,7 +23,13 @@ export function mergeAlertPreferences(
   const channels = { ...current.channels };
   for (const kind of ALERT_KINDS) {
     const change = patch.channels?.[kind];
-    if (change) channels[kind] = { ...channels[kind], ...change };
+    // A request object may carry a field as `undefined` (class instances do): that keeps the value.
+    if (change) {
+      channels[kind] = {
+        email: change.email ?? channels[kind].email,
+        push: change.push ?? channels[kind].push,
+      };
+    }
   }
   return {
     leadMinutes: patch.leadMinutes ?? current.leadMinutes,

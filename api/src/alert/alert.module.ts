@@ -1,0 +1,33 @@
+import { Global, Module } from '@nestjs/common';
+import { BakePlanRepository } from '../bake-plan/bake-plan.repository.js';
+import { CultureSummaryRepository } from '../culture/culture-summary.repository.js';
+import { CultureRepository } from '../culture/culture.repository.js';
+import { AlertClock } from './alert.clock.js';
+import { AlertController } from './alert.controller.js';
+import { AlertQueue } from './alert.queue.js';
+import { AlertRepository } from './alert.repository.js';
+import { AlertScheduler } from './alert.scheduler.js';
+import { AlertService } from './alert.service.js';
+import { AlertWorker } from './alert.worker.js';
+
+/**
+ * Global so the logbook and Bench services can call AlertScheduler without importing this module
+ * (which reads their tables through its own repository instances: no import cycle).
+ */
+@Global()
+@Module({
+  controllers: [AlertController],
+  providers: [
+    AlertClock,
+    AlertQueue,
+    AlertRepository,
+    AlertScheduler,
+    AlertService,
+    AlertWorker,
+    CultureRepository,
+    CultureSummaryRepository,
+    BakePlanRepository,
+  ],
+  exports: [AlertScheduler, AlertRepository, AlertWorker, AlertClock],
+})
+export class AlertModule {}

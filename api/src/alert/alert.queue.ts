@@ -1,0 +1,77 @@
+import { Inject, Injectable, Logger, type OnApplicationBootstrap, type OnApplicationShutdown } from '@nestjs/common';
+import PgBoss from 'pg-boss';
+import { APP_CONFIG, type AppConfig } from '../config.js';
+
+export const ALERT_DUE_QUEUE = 'alert-due';
+/** pg-boss keeps its tables here, apart from ours (sql/ never touches it). */
+export const ALERT_QUEUE_SCHEMA = 'pgboss';
+const DEFAULT_POLLING_SECONDS = 2;
+
+export interface AlertDueJob {
+  deliveryId: string;
+}
+
+type Handler = (job: AlertDueJob) => Promise<void>;
+
+/**
+ * The durable queue (pg-boss on the same database): a job per delivery, started after its send
+ * time. The job only wakes the worker; whether to send is decided by the claim on alert_delivery,
+ * so a stale or repeated job is harmless.
+ */
+@Injectable()
+export class AlertQueue implements OnApplicationBootstrap, OnApplicationShutdown {
+  private readonly logger = new Logger('AlertQueue');
+  private readonly boss: PgBoss;
+  private handler: Handler | null = null;
+  private started: Promise<void> | null = null;
+
+  constructor(@Inject(APP_CONFIG) private readonly config: AppConfig) {
+    this.boss = new PgBoss({
+      connectionString: config.databaseUrl,
+      schema: ALERT_QUEUE_SCHEMA,
+      max: 4,
+      // No cron schedules: every alert is a job with its own start time.
+      schedule: false,
+    });
+    this.boss.on('error', (error) => this.logger.error(error.message));
+  }
+
+  /** The worker registers here before the application starts. */
+  onWork(handler: Handler): void {
+    this.handler = handler;
+  }
+
+  async onApplicationBootstrap(): Promise<void> {
+    this.started = (async () => {
+      await this.boss.start();
+      await this.boss.createQueue(ALERT_DUE_QUEUE);
+      const handler = this.handler;
+      if (handler) {
+        const pollingIntervalSeconds = Math.max(0.5, this.config.alertPollingSeconds ?? DEFAULT_POLLING_SECONDS);
+        await this.boss.work<AlertDueJob>(ALERT_DUE_QUEUE, { pollingIntervalSeconds, batchSize: 5 }, async (jobs) => {
+          for (const job of jobs) await handler(job.data);
+        });
+      }
+    })();
+    await this.started;
+  }
+
+  async onApplicationShutdown(): Promise<void> {
+    if (!this.started) return;
+    await this.started.catch(() => undefined);
+    // Graceful: the worker finishes the job in hand (its claim is recorded) before the pool closes.
+    await this.boss.stop({ graceful: true, wait: true, timeout: 10_000 });
+  }
+
+  /** A job at `at` for one delivery; the key includes the time so a moved delivery gets a fresh job. */
+  async schedule(deliveryId: string, slotKey: string, at: Date): Promise<void> {
+    await this.started;
+    await this.boss.send(ALERT_DUE_QUEUE, { deliveryId } satisfies AlertDueJob, {
+      startAfter: at,
+      singletonKey: `${slotKey}:${deliveryId}:${at.getTime()}`,
+      retryLimit: 5,
+      retryDelay: 30,
+      retryBackoff: true,
+    });
+  }
+}

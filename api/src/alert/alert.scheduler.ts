@@ -1,0 +1,130 @@
+import { Injectable, Logger } from '@nestjs/common';
+import {
+  channelsFor,
+  cultureAlerts,
+  defaultAlertPreferences,
+  deliveryFor,
+  planAlerts,
+  type AlertChannel,
+  type AlertPreferences,
+  type WantedAlert,
+} from '@peakwise/shared';
+import { livePlan } from '../bake-plan/bake-plan.live.js';
+import { BakePlanRepository } from '../bake-plan/bake-plan.repository.js';
+import { computeSummary } from '../culture/culture-summary.compute.js';
+import { CultureSummaryRepository } from '../culture/culture-summary.repository.js';
+import { toCulture } from '../culture/culture.mapper.js';
+import { CultureRepository } from '../culture/culture.repository.js';
+import { AlertClock } from './alert.clock.js';
+import { historyOf } from './alert.history.js';
+import { AlertQueue } from './alert.queue.js';
+import { AlertRepository, type DeliveryPlan } from './alert.repository.js';
+
+/** Channels this build can send; `push` is in the shapes and preferences but not delivered yet. */
+export const DELIVERED_CHANNELS: readonly AlertChannel[] = ['in-app', 'email'];
+
+/**
+ * Keeps the stored alerts equal to what the rules want: new ones are inserted, moved ones keep
+ * their row with the new time, ones no longer wanted are cancelled. Called after every write that
+ * can change a prediction (feeding, rise check, temperature, plan). Never throws to the caller:
+ * a failed refresh is logged, and the write the baker made stands.
+ */
+@Injectable()
+export class AlertScheduler {
+  private readonly logger = new Logger('AlertScheduler');
+
+  constructor(
+    private readonly alerts: AlertRepository,
+    private readonly queue: AlertQueue,
+    private readonly clock: AlertClock,
+    private readonly cultures: CultureRepository,
+    private readonly history: CultureSummaryRepository,
+    private readonly plans: BakePlanRepository,
+  ) {}
+
+  async refreshCulture(cultureId: string): Promise<void> {
+    await this.guard(`culture ${cultureId}`, async () => {
+      const accountId = await this.alerts.cultureOwner(cultureId);
+      if (!accountId) return;
+      const row = await this.cultures.findOwned(accountId, cultureId);
+      if (!row) return;
+      const now = this.clock.now();
+      const prefs = await this.preferencesOf(accountId);
+      const summary = computeSummary(toCulture(row), historyOf(await this.history.history(cultureId)), now);
+      const wanted = cultureAlerts({ accountId, summary, leadMinutes: prefs.leadMinutes, now: now.toISOString() });
+      await this.sync(accountId, { cultureId }, wanted, prefs);
+    });
+  }
+
+  /** After a change to one feeding's rise checks or readings. */
+  async refreshFeeding(feedingId: string): Promise<void> {
+    const cultureId = await this.alerts.feedingCulture(feedingId);
+    if (cultureId) await this.refreshCulture(cultureId);
+  }
+
+  async refreshPlan(planId: string): Promise<void> {
+    await this.guard(`plan ${planId}`, async () => {
+      const accountId = await this.alerts.planOwner(planId);
+      if (!accountId) return;
+      const row = await this.plans.findOwned(accountId, planId);
+      if (!row) return;
+      const now = this.clock.now();
+      const [checked, readings] = await Promise.all([this.plans.checkedSteps(planId), this.plans.readings(planId)]);
+      const steps = row.status === 'active' ? livePlan(row, checked, readings, now).steps : [];
+      const wanted = planAlerts({
+        accountId,
+        plan: { id: row.id, name: row.name, status: row.status, steps },
+        now: now.toISOString(),
+      });
+      await this.sync(accountId, { planId }, wanted, await this.preferencesOf(accountId));
+    });
+  }
+
+  private async preferencesOf(accountId: string): Promise<AlertPreferences> {
+    return (await this.alerts.preferences(accountId)) ?? defaultAlertPreferences();
+  }
+
+  private async sync(
+    accountId: string,
+    subject: { cultureId: string } | { planId: string },
+    wanted: WantedAlert[],
+    prefs: AlertPreferences,
+  ): Promise<void> {
+    const recipient = await this.alerts.recipient(accountId);
+    const timeZone = recipient?.timeZone ?? 'UTC';
+    for (const alert of wanted) {
+      const alertId = await this.alerts.upsertWanted(accountId, alert);
+      if (!alertId) continue;
+      const plans: DeliveryPlan[] = channelsFor(prefs, alert.kind)
+        .filter((c) => DELIVERED_CHANNELS.includes(c))
+        .map((channel) => {
+          const d = deliveryFor({
+            channel,
+            dueAt: alert.dueAt,
+            staleAt: alert.staleAt,
+            quietHours: prefs.quietHours,
+            timeZone,
+          });
+          return d.action === 'send'
+            ? { channel, sendAfter: new Date(d.at), dropped: false }
+            : { channel, sendAfter: new Date(alert.dueAt), dropped: true };
+        });
+      for (const delivery of await this.alerts.planDeliveries(alertId, plans)) {
+        await this.queue.schedule(delivery.id, alert.slotKey, delivery.sendAfter);
+      }
+    }
+    await this.alerts.cancelPending(
+      accountId,
+      subject,
+      wanted.map((w) => w.slotKey),
+    );
+  }
+
+  private async guard(what: string, work: () => Promise<void>): Promise<void> {
+    try {
+      await work();
+    } catch (error) {
+      this.logger.error(`Alert refresh of ${what} failed: ${error instanceof Error ? error.message : String(error)}`);
+    }
+  }
+}
