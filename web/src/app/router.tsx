@@ -113,6 +113,14 @@ function createAppRouter() {
                   }),
                 },
                 {
+                  path: 'account/alerts',
+                  lazy: async () => ({ Component: (await import('./routes/alerts-settings')).AlertSettingsRoute }),
+                },
+                {
+                  path: 'alerts',
+                  lazy: async () => ({ Component: (await import('./routes/alerts')).AlertsRoute }),
+                },
+                {
                   path: 'admin',
                   element: (
                     <RequireRole role="admin" fallback={<NotAllowed what="This page is for Peakwise admins." />} />

@@ -4,6 +4,7 @@ import Link from '@mui/material/Link';
 import Toolbar from '@mui/material/Toolbar';
 import { Link as RouterLink } from 'react-router-dom';
 import { Wordmark } from '@/components/brand/wordmark';
+import { AlertBell } from '@/lib/alerts/alert-bell';
 import { AccountMenu } from './account-menu';
 
 export function TopBar() {
@@ -19,6 +20,7 @@ export function TopBar() {
           <Wordmark onDark />
         </Link>
         <Box sx={{ flexGrow: 1 }} />
+        <AlertBell />
         <AccountMenu />
       </Toolbar>
     </AppBar>
