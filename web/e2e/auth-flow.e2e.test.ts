@@ -2,17 +2,7 @@ import { join } from 'node:path';
 import { request, type Page } from 'playwright-core';
 import { afterEach, beforeEach, describe, expect, it } from 'vitest';
 import { baseUrl, DESKTOP, launchBrowser, PHONE, RESULTS_DIR, uniqueEmail, type Browser } from './browser';
-
-const PASSWORD = 'rye starter bubbles at dawn';
-
-async function signUp(page: Page, base: string, displayName: string, email: string) {
-  await page.goto(`${base}/sign-up`);
-  await page.getByLabel('Your name').fill(displayName);
-  await page.getByLabel('E-mail').fill(email);
-  await page.getByLabel('Password', { exact: true }).fill(PASSWORD);
-  await page.getByRole('button', { name: 'Create account' }).click();
-  await page.waitForURL(`${base}/`);
-}
+import { PASSWORD, signUp } from './helpers';
 
 /** The page heading greets the baker by name ("Good morning, Theo Park"); returns its text. */
 async function greetingFor(page: Page, name: string): Promise<string> {

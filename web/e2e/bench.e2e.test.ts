@@ -2,19 +2,21 @@ import { readFile } from 'node:fs/promises';
 import { join } from 'node:path';
 import type { Locator, Page } from 'playwright-core';
 import { afterEach, beforeEach, describe, expect, it } from 'vitest';
-import { baseUrl, DESKTOP, launchBrowser, PHONE, RESULTS_DIR, uniqueEmail, type Browser } from './browser';
+import { baseUrl, DESKTOP, launchBrowser, PHONE, RESULTS_DIR, type Browser } from './browser';
+import { createCulture, createFeeding, HOUR, patchAccount, post, signUp } from './helpers';
 
-const PASSWORD = 'levain peaks before the mix';
 const ZONE = 'Europe/Berlin';
 
-async function signUp(page: Page, base: string) {
-  await page.goto(`${base}/sign-up`);
-  await page.getByLabel('Your name').fill('Theo Park');
-  await page.getByLabel('E-mail').fill(uniqueEmail('theo'));
-  await page.getByLabel('Password', { exact: true }).fill(PASSWORD);
-  await page.getByRole('button', { name: 'Create account' }).click();
-  await page.waitForURL(`${base}/`);
-}
+// The formula both bakes use: 75 % water, 20 % levain, 2 % salt (baker's percentages).
+const COUNTRY_LOAF = {
+  name: 'Country loaf 75 %',
+  ingredients: [
+    { kind: 'flour', name: 'Bread flour', amount: 1000, unit: 'g' },
+    { kind: 'water', name: 'Water', amount: 750, unit: 'g' },
+    { kind: 'starter', name: 'Levain', amount: 200, unit: 'g' },
+    { kind: 'salt', name: 'Salt', amount: 20, unit: 'g' },
+  ],
+};
 
 /** The whole page on a phone as tall as it, so the fixed bars sit where they belong. */
 async function tallShot(page: Page, name: string, only?: Locator) {
@@ -62,36 +64,17 @@ describe('Bench on a phone', () => {
   });
 
   it('plans ready-at tomorrow 09:00 around quiet hours, follows the overnight retard, checks off, logs, exports', async () => {
-    await signUp(page, base);
+    await signUp(page, base, 'Theo Park');
     // The baker lives in Berlin while the browser runs in another zone: times follow the account.
-    const zone = await page.request.patch(`${base}/api/account`, { data: { timeZone: ZONE } });
-    expect(zone.status()).toBe(200);
-    const formula = await page.request.post(`${base}/api/formulas`, {
-      headers: { 'Idempotency-Key': crypto.randomUUID() },
-      data: {
-        name: 'Country loaf 75 %',
-        ingredients: [
-          { kind: 'flour', name: 'Bread flour', amount: 1000, unit: 'g' },
-          { kind: 'water', name: 'Water', amount: 750, unit: 'g' },
-          { kind: 'starter', name: 'Levain', amount: 200, unit: 'g' },
-          { kind: 'salt', name: 'Salt', amount: 20, unit: 'g' },
-        ],
-      },
-    });
-    expect(formula.status()).toBe(201);
+    await patchAccount(page, base, { timeZone: ZONE });
+    await post(page, `${base}/api/formulas`, COUNTRY_LOAF);
     // Bramble, fed five hours ago: the feeding that will leaven the bake.
-    const culture = await page.request.post(`${base}/api/cultures`, {
-      headers: { 'Idempotency-Key': crypto.randomUUID() },
-      data: { name: 'Bramble' },
+    const cultureId = await createCulture(page, base, 'Bramble');
+    const feedingId = await createFeeding(page, base, cultureId, {
+      fedAt: new Date(Date.now() - 5 * HOUR).toISOString(),
+      ratio: '1:2:2',
+      totalG: 100,
     });
-    expect(culture.status()).toBe(201);
-    const { id: cultureId } = (await culture.json()) as { id: string };
-    const feeding = await page.request.post(`${base}/api/cultures/${cultureId}/feedings`, {
-      headers: { 'Idempotency-Key': crypto.randomUUID() },
-      data: { fedAt: new Date(Date.now() - 5 * 3_600_000).toISOString(), ratio: '1:2:2', totalG: 100 },
-    });
-    expect(feeding.status()).toBe(201);
-    const { id: feedingId } = (await feeding.json()) as { id: string };
     await page.reload();
 
     await page.getByTestId('bottom-nav').getByRole('link', { name: 'Bench' }).click();
@@ -192,11 +175,7 @@ describe('Bench on a phone', () => {
     type Live = { live: { steps: { id: string; action: boolean; done: boolean }[] } };
     const view = (await (await page.request.get(`${base}/api/plans/${planId}`)).json()) as Live;
     for (const step of view.live.steps.filter((s) => s.action && !s.done)) {
-      const res = await page.request.post(`${base}/api/plans/${planId}/steps/${step.id}/done`, {
-        headers: { 'Idempotency-Key': crypto.randomUUID() },
-        data: {},
-      });
-      expect(res.status()).toBe(201);
+      await post(page, `${base}/api/plans/${planId}/steps/${step.id}/done`, {});
     }
     await page.setViewportSize(PHONE);
     await page.reload();
@@ -226,21 +205,9 @@ describe('Bench on a phone', () => {
   });
 
   it('offers a warmer spot when a cool kitchen cannot make it the same day', async () => {
-    await signUp(page, base);
-    expect((await page.request.patch(`${base}/api/account`, { data: { timeZone: ZONE } })).status()).toBe(200);
-    const formula = await page.request.post(`${base}/api/formulas`, {
-      headers: { 'Idempotency-Key': crypto.randomUUID() },
-      data: {
-        name: 'Country loaf 75 %',
-        ingredients: [
-          { kind: 'flour', name: 'Bread flour', amount: 1000, unit: 'g' },
-          { kind: 'water', name: 'Water', amount: 750, unit: 'g' },
-          { kind: 'starter', name: 'Levain', amount: 200, unit: 'g' },
-          { kind: 'salt', name: 'Salt', amount: 20, unit: 'g' },
-        ],
-      },
-    });
-    expect(formula.status()).toBe(201);
+    await signUp(page, base, 'Theo Park');
+    await patchAccount(page, base, { timeZone: ZONE });
+    await post(page, `${base}/api/formulas`, COUNTRY_LOAF);
     await page.goto(`${base}/bench/new`);
     await expect.poll(() => page.getByLabel('Formula').inputValue()).not.toBe('');
 

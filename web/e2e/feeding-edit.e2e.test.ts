@@ -1,10 +1,8 @@
 import { join } from 'node:path';
 import type { Page } from 'playwright-core';
 import { afterEach, beforeEach, describe, expect, it } from 'vitest';
-import { baseUrl, DESKTOP, launchBrowser, PHONE, RESULTS_DIR, uniqueEmail, type Browser } from './browser';
-
-const PASSWORD = 'rye starter bubbles at dawn';
-const HOUR = 3_600_000;
+import { baseUrl, DESKTOP, launchBrowser, PHONE, RESULTS_DIR, type Browser } from './browser';
+import { addRiseChecks, HOUR, localInput, patchAccount, signUp } from './helpers';
 
 interface FeedingJson {
   id: string;
@@ -16,25 +14,10 @@ interface FeedingJson {
   observations: string[];
 }
 
-/** "2026-12-01T10:05" in the browser's zone, as a datetime-local input takes it. */
-async function localInput(page: Page, ms: number): Promise<string> {
-  return page.evaluate((t) => {
-    const d = new Date(t);
-    const pad = (n: number) => String(n).padStart(2, '0');
-    return `${d.getFullYear()}-${pad(d.getMonth() + 1)}-${pad(d.getDate())}T${pad(d.getHours())}:${pad(d.getMinutes())}`;
-  }, ms);
-}
-
 /** A US-units baker (°F, inches) with a culture and one feeding logged through the form 3 h ago. */
 async function bakerWithFeeding(page: Page, base: string): Promise<{ cultureId: string; feeding: FeedingJson }> {
-  await page.goto(`${base}/sign-up`);
-  await page.getByLabel('Your name').fill('Dev Rowan');
-  await page.getByLabel('E-mail').fill(uniqueEmail('dev'));
-  await page.getByLabel('Password', { exact: true }).fill(PASSWORD);
-  await page.getByRole('button', { name: 'Create account' }).click();
-  await page.waitForURL(`${base}/`);
-  const units = await page.request.patch(`${base}/api/account`, { data: { unitSystem: 'us', temperatureUnit: 'F' } });
-  expect(units.status()).toBe(200);
+  await signUp(page, base, 'Dev Rowan');
+  await patchAccount(page, base, { unitSystem: 'us', temperatureUnit: 'F' });
 
   await page.goto(`${base}/shelf`);
   await page.getByLabel('Name').fill('Pip');
@@ -89,16 +72,10 @@ describe('correcting one feeding on a phone', () => {
     const page = await browser.context.newPage();
     const { cultureId, feeding } = await bakerWithFeeding(page, base);
     const fedAt = Date.parse(feeding.fedAt);
-    for (const [hours, heightMm] of [
+    await addRiseChecks(page, base, feeding.id, fedAt, [
       [1, 45],
       [2, 60],
-    ] as const) {
-      const res = await page.request.post(`${base}/api/feedings/${feeding.id}/rise-checks`, {
-        headers: { 'Idempotency-Key': crypto.randomUUID() },
-        data: { takenAt: new Date(fedAt + hours * HOUR).toISOString(), heightMm },
-      });
-      expect(res.status()).toBe(201);
-    }
+    ]);
 
     // The culture page's feedings table: a tap on the row (not only its date link) opens the feeding.
     await page.reload();

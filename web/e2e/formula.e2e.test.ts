@@ -2,18 +2,8 @@ import { join } from 'node:path';
 import type { FormulaComputed } from '@peakwise/shared';
 import type { Page } from 'playwright-core';
 import { afterEach, beforeEach, describe, expect, it } from 'vitest';
-import { baseUrl, DESKTOP, launchBrowser, PHONE, RESULTS_DIR, uniqueEmail, type Browser } from './browser';
-
-const PASSWORD = 'rye starter bubbles at dawn';
-
-async function signUp(page: Page, base: string) {
-  await page.goto(`${base}/sign-up`);
-  await page.getByLabel('Your name').fill('Dev Rowan');
-  await page.getByLabel('E-mail').fill(uniqueEmail('dev'));
-  await page.getByLabel('Password', { exact: true }).fill(PASSWORD);
-  await page.getByRole('button', { name: 'Create account' }).click();
-  await page.waitForURL(`${base}/`);
-}
+import { baseUrl, DESKTOP, launchBrowser, PHONE, RESULTS_DIR, type Browser } from './browser';
+import { signUp } from './helpers';
 
 /** Fills line `n` (1-based) of the editor. */
 async function line(page: Page, n: number, amount: string, unit: string, food?: string) {
@@ -56,7 +46,7 @@ describe('Formula on a phone', () => {
   });
 
   it('weighs a volume recipe, switches views, scales to pieces, picks the water, saves and reopens', async () => {
-    await signUp(page, base);
+    await signUp(page, base, 'Dev Rowan');
     await page.getByTestId('bottom-nav').getByRole('link', { name: 'Formula' }).click();
     await page.waitForURL(`${base}/formulas`);
     await page.getByRole('link', { name: 'New formula' }).click();

@@ -2,9 +2,16 @@ import { join } from 'node:path';
 import { request, type Page } from 'playwright-core';
 import { afterEach, beforeEach, describe, expect, it } from 'vitest';
 import { baseUrl, DESKTOP, launchBrowser, PHONE, RESULTS_DIR, uniqueEmail, type Browser } from './browser';
-
-const PASSWORD = 'rye starter bubbles at dawn';
-const HOUR = 3_600_000;
+import {
+  addRiseChecks,
+  createCulture,
+  createFeeding,
+  HOUR,
+  localInput,
+  PASSWORD,
+  patchAccount,
+  signUp,
+} from './helpers';
 
 /** Whether this server answers GET /api/cultures/:id/summary (asked once, with a throwaway account). */
 async function probeSummary(base: string): Promise<boolean> {
@@ -23,31 +30,13 @@ async function probeSummary(base: string): Promise<boolean> {
 
 const summaryAvailable = await probeSummary(baseUrl());
 
-async function signUp(page: Page, base: string, displayName: string) {
-  await page.goto(`${base}/sign-up`);
-  await page.getByLabel('Your name').fill(displayName);
-  await page.getByLabel('E-mail').fill(uniqueEmail('theo'));
-  await page.getByLabel('Password', { exact: true }).fill(PASSWORD);
-  await page.getByRole('button', { name: 'Create account' }).click();
-  await page.waitForURL(`${base}/`);
-}
-
-/** "2026-12-01T10:05" in the browser's zone, as a datetime-local input takes it. */
-async function localInput(page: Page, ms: number): Promise<string> {
-  return page.evaluate((t) => {
-    const d = new Date(t);
-    const pad = (n: number) => String(n).padStart(2, '0');
-    return `${d.getFullYear()}-${pad(d.getMonth() + 1)}-${pad(d.getDate())}T${pad(d.getHours())}:${pad(d.getMinutes())}`;
-  }, ms);
-}
-
-// Heights (mm) of a 40 mm starter climbing towards about 2.2 × (a Gompertz-like rise; invented).
+// [hours, height in mm] of a 40 mm starter climbing towards about 2.2 × (a Gompertz-like rise; invented).
 const CHECKS = [
-  { hours: 1, heightMm: 43.2 },
-  { hours: 2, heightMm: 58 },
-  { hours: 3, heightMm: 73.6 },
-  { hours: 3.5, heightMm: 78.8 },
-];
+  [1, 43.2],
+  [2, 58],
+  [3, 73.6],
+  [3.5, 78.8],
+] as const;
 
 /** Creates the culture, logs a 1:2:2 feeding 4 h ago in the form, then five rise checks. */
 async function logFeedingAndChecks(page: Page, base: string): Promise<string> {
@@ -95,13 +84,7 @@ async function logFeedingAndChecks(page: Page, base: string): Promise<string> {
   expect(Math.abs(fedAt - (Date.now() - 4 * HOUR))).toBeLessThan(5 * 60_000);
 
   // Four past rise checks through the API with this session, each with its own idempotency key…
-  for (const check of CHECKS) {
-    const res = await page.request.post(`${base}/api/feedings/${feeding.id}/rise-checks`, {
-      headers: { 'Idempotency-Key': crypto.randomUUID() },
-      data: { takenAt: new Date(fedAt + check.hours * HOUR).toISOString(), heightMm: check.heightMm },
-    });
-    expect(res.status()).toBe(201);
-  }
+  await addRiseChecks(page, base, feeding.id, fedAt, CHECKS);
   // …and the fifth, now, through the Rise check page.
   await page.goto(`${base}/shelf`);
   const card = page.getByTestId('culture-card').filter({ hasText: 'Bramble' });
@@ -119,13 +102,14 @@ async function logFeedingAndChecks(page: Page, base: string): Promise<string> {
 /** A finished feeding `hoursAgo` back, with its rise checks, straight through the API. */
 async function logPastFeeding(page: Page, base: string, cultureId: string, hoursAgo: number) {
   const fedAt = Date.now() - hoursAgo * HOUR;
-  const feeding = await page.request.post(`${base}/api/cultures/${cultureId}/feedings`, {
-    headers: { 'Idempotency-Key': crypto.randomUUID() },
-    data: { fedAt: new Date(fedAt).toISOString(), ratio: '1:2:2', totalG: 150, temperatureC: 21, initialHeightMm: 40 },
+  const id = await createFeeding(page, base, cultureId, {
+    fedAt: new Date(fedAt).toISOString(),
+    ratio: '1:2:2',
+    totalG: 150,
+    temperatureC: 21,
+    initialHeightMm: 40,
   });
-  expect(feeding.status()).toBe(201);
-  const { id } = (await feeding.json()) as { id: string };
-  for (const [hours, heightMm] of [
+  await addRiseChecks(page, base, id, fedAt, [
     [1.5, 42],
     [3, 52],
     [4.5, 66],
@@ -133,13 +117,7 @@ async function logPastFeeding(page: Page, base: string, cultureId: string, hours
     [7.5, 84],
     [9, 85],
     [10.5, 80],
-  ] as const) {
-    const res = await page.request.post(`${base}/api/feedings/${id}/rise-checks`, {
-      headers: { 'Idempotency-Key': crypto.randomUUID() },
-      data: { takenAt: new Date(fedAt + hours * HOUR).toISOString(), heightMm },
-    });
-    expect(res.status()).toBe(201);
-  }
+  ]);
 }
 
 describe('the culture logbook on a phone', () => {
@@ -221,15 +199,8 @@ describe('the culture logbook on a phone', () => {
   it('takes °F and inches in the feeding form and stores °C and mm', async () => {
     const page = await browser.context.newPage();
     await signUp(page, base, 'Dev Rowan');
-    const account = await page.request.patch(`${base}/api/account`, {
-      data: { unitSystem: 'us', temperatureUnit: 'F' },
-    });
-    expect(account.status()).toBe(200);
-    const created = await page.request.post(`${base}/api/cultures`, {
-      headers: { 'Idempotency-Key': crypto.randomUUID() },
-      data: { name: 'Pip' },
-    });
-    const { id } = (await created.json()) as { id: string };
+    await patchAccount(page, base, { unitSystem: 'us', temperatureUnit: 'F' });
+    const id = await createCulture(page, base, 'Pip');
 
     await page.goto(`${base}/cultures/${id}/feed`);
     await page.getByRole('button', { name: '1:1:1' }).click();

@@ -3,25 +3,8 @@ import { join } from 'node:path';
 import { CSV_COLUMNS, REQUEST_BODY_MAX_BYTES } from '@peakwise/shared';
 import type { Download, Locator, Page } from 'playwright-core';
 import { afterEach, beforeEach, describe, expect, it } from 'vitest';
-import { baseUrl, DESKTOP, launchBrowser, PHONE, RESULTS_DIR, uniqueEmail, type Browser } from './browser';
-
-const PASSWORD = 'rye starter bubbles at dawn';
-const HOUR = 3_600_000;
-
-async function signUp(page: Page, base: string) {
-  await page.goto(`${base}/sign-up`);
-  await page.getByLabel('Your name').fill('Amara Quist');
-  await page.getByLabel('E-mail').fill(uniqueEmail('amara'));
-  await page.getByLabel('Password', { exact: true }).fill(PASSWORD);
-  await page.getByRole('button', { name: 'Create account' }).click();
-  await page.waitForURL(`${base}/`);
-}
-
-async function post(page: Page, url: string, data: unknown): Promise<{ id: string }> {
-  const res = await page.request.post(url, { headers: { 'Idempotency-Key': crypto.randomUUID() }, data });
-  expect(res.status(), await res.text()).toBe(201);
-  return (await res.json()) as { id: string };
-}
+import { baseUrl, DESKTOP, launchBrowser, PHONE, RESULTS_DIR, type Browser } from './browser';
+import { createCulture, createFeeding, HOUR, post, signUp } from './helpers';
 
 async function feedingCount(page: Page, base: string, cultureId: string): Promise<number> {
   const res = await page.request.get(`${base}/api/cultures/${cultureId}/feedings?limit=1`);
@@ -85,10 +68,10 @@ describe('import and export on a phone', () => {
 
   it('downloads the CSV, imports a spreadsheet with its own headers after fixing a row, and skips it the second time', async () => {
     const page = await browser.context.newPage();
-    await signUp(page, base);
-    const { id } = await post(page, `${base}/api/cultures`, { name: 'Bramble' });
+    await signUp(page, base, 'Amara Quist');
+    const id = await createCulture(page, base, 'Bramble');
     const logged = Date.now() - 72 * HOUR;
-    const feeding = await post(page, `${base}/api/cultures/${id}/feedings`, {
+    const feedingId = await createFeeding(page, base, id, {
       fedAt: at(logged),
       starterG: 20,
       flourG: 100,
@@ -99,7 +82,7 @@ describe('import and export on a phone', () => {
       [2, 60],
       [4, 84.5],
     ] as const) {
-      await post(page, `${base}/api/feedings/${feeding.id}/rise-checks`, {
+      await post(page, `${base}/api/feedings/${feedingId}/rise-checks`, {
         takenAt: at(logged + hours * HOUR),
         heightMm,
       });
