@@ -1,7 +1,25 @@
 import { join } from 'node:path';
 import { afterEach, beforeEach, describe, expect, it } from 'vitest';
-import { baseUrl, launchBrowser, PHONE, RESULTS_DIR, type Browser } from './browser';
-import { createCulture, createFeeding, HOUR, signUp } from './helpers';
+import type { Page } from 'playwright-core';
+import { baseUrl, launchBrowser, PHONE, RESULTS_DIR, uniqueEmail, type Browser } from './browser';
+
+const HOUR = 3_600_000;
+
+async function signUp(page: Page, base: string, name: string): Promise<void> {
+  await page.goto(`${base}/sign-up`);
+  await page.getByLabel('Your name').fill(name);
+  await page.getByLabel('E-mail').fill(uniqueEmail('alerts'));
+  await page.getByLabel('Password', { exact: true }).fill('rye starter bubbles at dawn');
+  await page.getByRole('button', { name: 'Create account' }).click();
+  await page.waitForURL(`${base}/`);
+}
+
+/** A logbook POST with this session and a fresh Idempotency-Key; answers the new id. */
+async function post(page: Page, url: string, data: unknown): Promise<string> {
+  const res = await page.request.post(url, { headers: { 'Idempotency-Key': crypto.randomUUID() }, data });
+  expect(res.status(), await res.text()).toBe(201);
+  return ((await res.json()) as { id: string }).id;
+}
 
 // A feeding logged 2 h ago with a lead time of 240 min puts the culture-ready alert at "now": the
 // server's queue delivers it, and the bell (polling every 10 s) shows it.
@@ -27,8 +45,8 @@ describe('alerts at phone size', () => {
       },
     });
     expect(prefs.status(), await prefs.text()).toBe(200);
-    const cultureId = await createCulture(page, base, 'Bramble');
-    await createFeeding(page, base, cultureId, {
+    const cultureId = await post(page, `${base}/api/cultures`, { name: 'Bramble' });
+    await post(page, `${base}/api/cultures/${cultureId}/feedings`, {
       fedAt: new Date(Date.now() - 2 * HOUR).toISOString(),
       starterG: 20,
       flourG: 40,
