@@ -17,6 +17,7 @@ import {
   webDist,
 } from './lib/project.mjs';
 import { readDemoAccounts } from './lib/demo.mjs';
+import { startFakeMail } from './lib/fake-mail.mjs';
 import { fail, log, run } from './lib/run.mjs';
 
 const port = Number(process.env.PORT ?? 3000);
@@ -46,11 +47,14 @@ if (!databaseUrl) {
 }
 
 let api = null;
+// The local fake mail server, unless SMTP_URL names a real one.
+let fakeMail = null;
 let stopping = false;
 function stopAll(code) {
   if (stopping) return;
   stopping = true;
-  const finish = () => {
+  const finish = async () => {
+    await fakeMail?.stop();
     cluster?.stop();
     log(code === 0 ? 'stopped' : `stopped (exit ${code})`);
     process.exit(code);
@@ -76,6 +80,20 @@ try {
   stopAll(1);
 }
 
+if (!stopping && !process.env.SMTP_URL) {
+  try {
+    fakeMail = await startFakeMail({
+      smtpPort: Number(process.env.FAKE_SMTP_PORT ?? 2525),
+      httpPort: Number(process.env.FAKE_SMTP_HTTP_PORT ?? 2526),
+      file: join(dataDir, 'fake-mail.json'),
+      quiet: true,
+    });
+  } catch (error) {
+    process.stderr.write(`[peakwise] ${error.message}\n`);
+    stopAll(1);
+  }
+}
+
 if (!stopping) {
   api = spawn('node', [apiEntry], {
     stdio: 'inherit',
@@ -86,7 +104,9 @@ if (!stopping) {
       HOST: host,
       SESSION_SECRET: process.env.SESSION_SECRET ?? persistentSecret('session'),
       WEB_DIST: webDist,
-      NODE_ENV: process.env.NODE_ENV ?? 'production',
+      ...(fakeMail ? { SMTP_URL: fakeMail.smtpUrl, DEV_MAIL_URL: fakeMail.httpUrl } : {}),
+      // With the fake mail server this is a local trial, not production: its mail page stays on.
+      NODE_ENV: process.env.NODE_ENV ?? (fakeMail ? 'development' : 'production'),
     },
   });
   api.on('exit', (code) => {
@@ -97,7 +117,7 @@ if (!stopping) {
   });
   api.on('error', (error) => fail(`could not start the API: ${error.message}`));
   await waitForHealth(`http://${host}:${port}/api/health`);
-  if (!stopping) printBanner(`http://${host}:${port}`);
+  if (!stopping) printBanner(`http://${host}:${port}`, fakeMail !== null);
 }
 
 async function waitForHealth(url) {
@@ -112,8 +132,11 @@ async function waitForHealth(url) {
   }
 }
 
-function printBanner(url) {
+function printBanner(url, withFakeMail) {
   const lines = ['', `Peakwise is running at ${url}`, ''];
+  if (withFakeMail) {
+    lines.push(`Mail sent by Peakwise (a local fake server; nothing leaves this machine): ${url}/dev/mail`, '');
+  }
   const accounts = readDemoAccounts(dataDir);
   if (accounts.length) {
     lines.push('Demo sign-ins (the Larkspur Community Kitchen class):');

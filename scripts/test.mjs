@@ -10,6 +10,7 @@ import { existsSync, mkdirSync, readFileSync, rmSync } from 'node:fs';
 import { join } from 'node:path';
 import { ensureChromium, ensureNodeModules, ensurePostgres } from './lib/install.mjs';
 import { LocalCluster, clusterParent } from './lib/postgres.mjs';
+import { startFakeMail } from './lib/fake-mail.mjs';
 import { apiEntry, cliEntry, ensureDataDir, root, webDist } from './lib/project.mjs';
 import { log, runAsync } from './lib/run.mjs';
 
@@ -34,6 +35,7 @@ mkdirSync(reports, { recursive: true });
 const results = [];
 let cluster = null;
 let server = null;
+let fakeMail = null;
 
 async function step(name, fn) {
   const started = Date.now();
@@ -102,7 +104,7 @@ async function startTestDatabase() {
   return cluster.url('peakwise_test');
 }
 
-function startServer(databaseUrl, port) {
+function startServer(databaseUrl, port, mail) {
   return new Promise((resolve, reject) => {
     server = spawn('node', [apiEntry], {
       cwd: root,
@@ -117,6 +119,8 @@ function startServer(databaseUrl, port) {
         LOG_LEVEL: 'warn',
         // Browser tests sign in many times from one address; api/test/throttle.api.test.ts covers the brake.
         AUTH_ATTEMPTS_PER_MINUTE: '1000',
+        SMTP_URL: mail.smtpUrl,
+        DEV_MAIL_URL: mail.httpUrl,
         NODE_ENV: 'test',
       },
     });
@@ -141,6 +145,7 @@ function cleanUp() {
     server.removeAllListeners('exit');
     server.kill('SIGTERM');
   }
+  if (fakeMail && fakeMail.child.exitCode === null) fakeMail.child.kill('SIGTERM');
   cluster?.stop();
 }
 process.on('SIGINT', () => {
@@ -179,7 +184,10 @@ try {
     if (want.has('e2e') && built) {
       const port = Number(process.env.E2E_PORT ?? 3999);
       await step('e2e: browser (Chromium, playwright-core)', async () => {
-        await startServer(databaseUrl, port);
+        // Its own ports, so a running `npm start` (2525/2526) is not disturbed; mail kept in memory only.
+        const smtpPort = Number(process.env.E2E_SMTP_PORT ?? 2535);
+        fakeMail = await startFakeMail({ smtpPort, httpPort: smtpPort + 1, file: null, quiet: true });
+        await startServer(databaseUrl, port, fakeMail);
         return vitest('e2e', 'web', ['--config', 'vitest.e2e.config.ts'], { E2E_BASE_URL: `http://127.0.0.1:${port}` });
       });
     }
