@@ -1,5 +1,5 @@
 import type { BakePlanView, CheckedStep, DoughReading } from '@peakwise/shared';
-import { afterAll, afterEach, beforeAll, beforeEach, describe, expect, it, vi } from 'vitest';
+import { beforeEach, describe, expect, it } from 'vitest';
 import {
   HOUR,
   MINUTE,
@@ -15,22 +15,18 @@ import {
   type Clock,
   type Method,
 } from './bake-plan.fixtures.js';
-import { expectError, expectFieldErrors, signUp, type SignedUp } from './helpers.js';
-import { createTestApp, resetDatabase, type TestApp } from './test-app.js';
+import { expectError, expectFieldErrors, signUp, withSignedInBaker, type SignedUp } from './helpers.js';
+import type { TestApp } from './test-app.js';
 
 let t: TestApp;
-beforeAll(async () => {
-  t = await createTestApp();
-});
-afterAll(() => t.close());
-afterEach(() => vi.restoreAllMocks());
-
 let theo: SignedUp;
 let amara: SignedUp;
 let clock: Clock;
+withSignedInBaker({ timeZone: ZONE }, (app, baker) => {
+  t = app;
+  theo = baker;
+});
 beforeEach(async () => {
-  await resetDatabase(t.db);
-  theo = await signUp(t.app, { displayName: 'Theo Park', timeZone: ZONE });
   amara = await signUp(t.app, { displayName: 'Amara Quist', timeZone: ZONE });
   clock = mockClock(t);
 });

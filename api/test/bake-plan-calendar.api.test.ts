@@ -1,5 +1,5 @@
 import type { BakePlanView } from '@peakwise/shared';
-import { afterAll, afterEach, beforeAll, beforeEach, describe, expect, it, vi } from 'vitest';
+import { beforeEach, describe, expect, it, vi } from 'vitest';
 import {
   HOUR,
   NOW,
@@ -13,20 +13,16 @@ import {
   planBody,
   step,
 } from './bake-plan.fixtures.js';
-import { expectError, signUp, type SignedUp } from './helpers.js';
-import { createTestApp, resetDatabase, type TestApp } from './test-app.js';
+import { expectError, signUp, withSignedInBaker, type SignedUp } from './helpers.js';
+import type { TestApp } from './test-app.js';
 
 let t: TestApp;
-beforeAll(async () => {
-  t = await createTestApp();
-});
-afterAll(() => t.close());
-afterEach(() => vi.restoreAllMocks());
-
 let theo: SignedUp;
-beforeEach(async () => {
-  await resetDatabase(t.db);
-  theo = await signUp(t.app, { displayName: 'Theo Park', timeZone: ZONE });
+withSignedInBaker({ timeZone: ZONE }, (app, baker) => {
+  t = app;
+  theo = baker;
+});
+beforeEach(() => {
   mockClock(t);
 });
 const call: ReturnType<typeof caller> = (...args) => caller(t, () => theo)(...args);

@@ -6,7 +6,7 @@ import {
   type BakePlanView,
   type PlanInput,
 } from '@peakwise/shared';
-import { afterAll, afterEach, beforeAll, beforeEach, describe, expect, it, vi } from 'vitest';
+import { beforeEach, describe, expect, it } from 'vitest';
 import {
   HOUR,
   MINUTE,
@@ -23,21 +23,17 @@ import {
   step,
   type Clock,
 } from './bake-plan.fixtures.js';
-import { expectFieldErrors, signUp, type SignedUp } from './helpers.js';
-import { createTestApp, resetDatabase, type TestApp } from './test-app.js';
+import { expectFieldErrors, withSignedInBaker, type SignedUp } from './helpers.js';
+import type { TestApp } from './test-app.js';
 
 let t: TestApp;
-beforeAll(async () => {
-  t = await createTestApp();
-});
-afterAll(() => t.close());
-afterEach(() => vi.restoreAllMocks());
-
 let theo: SignedUp;
 let clock: Clock;
-beforeEach(async () => {
-  await resetDatabase(t.db);
-  theo = await signUp(t.app, { displayName: 'Theo Park', timeZone: ZONE });
+withSignedInBaker({ timeZone: ZONE }, (app, baker) => {
+  t = app;
+  theo = baker;
+});
+beforeEach(() => {
   clock = mockClock(t);
 });
 // `t` is assigned in beforeAll, so the caller is made at each call.

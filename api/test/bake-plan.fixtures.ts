@@ -1,8 +1,7 @@
 import type { BakePlanView, Culture, Feeding, Formula, PlanStep, RiseCheck } from '@peakwise/shared';
-import { gompertz } from '@peakwise/shared';
-import { expect, vi } from 'vitest';
+import { vi } from 'vitest';
 import { BakePlanClock } from '../src/bake-plan/bake-plan.service.js';
-import { send, type InjectResponse, type SignedUp } from './helpers.js';
+import { created, gompertzHeight, send, type HttpMethod, type InjectResponse, type SignedUp } from './helpers.js';
 import type { TestApp } from './test-app.js';
 
 // Shared by the bake-plan API tests: a formula, a culture with observed peaks, and a clock the
@@ -26,17 +25,12 @@ export function mockClock(t: TestApp): Clock {
   return { set: (ms) => (now = ms) };
 }
 
-export type Method = 'GET' | 'POST' | 'PATCH' | 'DELETE';
+export type Method = HttpMethod;
+export { created };
 
 export function caller(t: TestApp, who: () => SignedUp) {
   return (method: Method, url: string, payload?: unknown, as: SignedUp = who()): Promise<InjectResponse> =>
     send(t.app, method, url, as.cookie, payload);
-}
-
-export async function created<T>(res: InjectResponse | Promise<InjectResponse>, status = 201): Promise<T> {
-  const r = await res;
-  expect(r.statusCode, r.body).toBe(status);
-  return r.json<T>();
 }
 
 /** A lean country loaf by weight: 1000 g flour, 750 g water, 200 g levain at 100 %, 20 g salt. */
@@ -87,7 +81,7 @@ export async function cultureWithPeaks(call: ReturnType<typeof caller>, as?: Sig
       ),
     );
     // Twice as fast as the rise of the published defaults' shape, so the culture is not average.
-    const height = (h: number) => Math.round(50 * (1 + gompertz(h * 2, 1.5, 0.35, 1.5)) * 10) / 10;
+    const height = (h: number) => gompertzHeight(50, h, 2);
     const points = [1, 2, 3, 4, 5].map((h) => ({ h, mm: height(h) }));
     points.push({ h: 6, mm: height(5) - 20 }, { h: 7, mm: height(5) - 30 });
     for (const p of points) {

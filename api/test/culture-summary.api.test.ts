@@ -1,7 +1,6 @@
 import {
   fitCultureKinetics,
   fitRise,
-  gompertz,
   predictNextPeak,
   type Culture,
   type CultureSummary,
@@ -9,25 +8,28 @@ import {
   type ObservedFeeding,
   type RiseCheck,
 } from '@peakwise/shared';
-import { afterAll, afterEach, beforeAll, beforeEach, describe, expect, it, vi } from 'vitest';
+import { describe, expect, it, vi } from 'vitest';
 import { SummaryClock } from '../src/culture/culture-summary.service.js';
-import { expectError, signUp, type InjectResponse, type SignedUp, send } from './helpers.js';
-import { createTestApp, resetDatabase, type TestApp } from './test-app.js';
+import {
+  created,
+  expectError,
+  gompertzHeight,
+  signUp,
+  withSignedInBaker,
+  type InjectResponse,
+  type SignedUp,
+  send,
+} from './helpers.js';
+import type { TestApp } from './test-app.js';
 
 // Test data is logged through the real routes at times in the past; the summary's "now" is the
 // SummaryClock, which a test may move to look at the culture at a chosen moment.
 
 let t: TestApp;
-beforeAll(async () => {
-  t = await createTestApp();
-});
-afterAll(() => t.close());
-afterEach(() => vi.restoreAllMocks());
-
 let theo: SignedUp;
-beforeEach(async () => {
-  await resetDatabase(t.db);
-  theo = await signUp(t.app, { displayName: 'Theo Park' });
+withSignedInBaker({}, (app, baker) => {
+  t = app;
+  theo = baker;
 });
 
 const HOUR = 3_600_000;
@@ -39,11 +41,7 @@ function call(method: 'GET' | 'POST', url: string, payload?: unknown, cookie = t
   return send(t.app, method, url, cookie, payload);
 }
 
-async function post<T>(url: string, payload: unknown): Promise<T> {
-  const res = await call('POST', url, payload);
-  expect(res.statusCode, res.body).toBe(201);
-  return res.json<T>();
-}
+const post = <T>(url: string, payload: unknown): Promise<T> => created<T>(call('POST', url, payload));
 
 const createCulture = (payload: Record<string, unknown> = {}) =>
   post<Culture>('/api/cultures', { name: 'Bramble', ...payload });
@@ -54,7 +52,7 @@ function feed(culture: Culture, payload: Record<string, unknown>): Promise<Feedi
 
 /** Rise checks of a Gompertz rise (heights rounded to 0.1 mm), `rate` × faster than at 24 °C. */
 async function logRise(feeding: Feeding, hours: number[], rate = 1, fall = false): Promise<RiseCheck[]> {
-  const height = (h: number) => Math.round(H0 * (1 + gompertz(h * rate, 1.5, 0.35, 1.5)) * 10) / 10;
+  const height = (h: number) => gompertzHeight(H0, h, rate);
   const points = hours.map((h) => ({ h, mm: height(h) }));
   if (fall) {
     const last = hours.at(-1) ?? 0;

@@ -1,9 +1,9 @@
 import type { NestFastifyApplication } from '@nestjs/platform-fastify';
-import type { Account, ErrorResponse, SignUpRequest } from '@peakwise/shared';
+import { gompertz, type Account, type ErrorResponse, type SignUpRequest } from '@peakwise/shared';
 import type { Response } from 'light-my-request';
-import { expect } from 'vitest';
+import { afterAll, afterEach, beforeAll, beforeEach, expect, vi } from 'vitest';
 import type { Database } from '../src/db/database.js';
-import { sessionCookie } from './test-app.js';
+import { createTestApp, resetDatabase, sessionCookie, type TestApp } from './test-app.js';
 
 export type InjectResponse = Response;
 
@@ -168,4 +168,37 @@ export function send(
   payload?: unknown,
 ): Promise<InjectResponse> {
   return app.inject({ method, url, payload: payload as never, headers: cookie ? { cookie } : {} });
+}
+
+/** Fails the test unless `res` answers `status` (201 by default); returns its JSON body. */
+export async function created<T>(res: InjectResponse | Promise<InjectResponse>, status = 201): Promise<T> {
+  const r = await res;
+  expect(r.statusCode, r.body).toBe(status);
+  return r.json<T>();
+}
+
+/**
+ * The hooks of a file about one signed-in baker: one app for the file, an empty database and a
+ * fresh sign-up (Theo Park unless `as` says otherwise) before each test, mocks restored after.
+ * `ready` hands the file its app and baker before each test, as neither exists before the hooks run.
+ */
+export function withSignedInBaker(as: Partial<SignUpRequest>, ready: (t: TestApp, baker: SignedUp) => void): void {
+  let t: TestApp;
+  beforeAll(async () => {
+    t = await createTestApp();
+  });
+  afterAll(() => t.close());
+  afterEach(() => vi.restoreAllMocks());
+  beforeEach(async () => {
+    await resetDatabase(t.db);
+    ready(t, await signUp(t.app, { displayName: 'Theo Park', ...as }));
+  });
+}
+
+/**
+ * The height (mm, to 0.1 mm) `hours` after feeding of a jar starting at `startMm` that rises along
+ * the Gompertz shape of the published defaults, `rate` × as fast (invented test data).
+ */
+export function gompertzHeight(startMm: number, hours: number, rate = 1): number {
+  return Math.round(startMm * (1 + gompertz(hours * rate, 1.5, 0.35, 1.5)) * 10) / 10;
 }
