@@ -61,6 +61,49 @@ describe('claiming a delivery', () => {
     expect(attempts.every((r) => r.attempts === 1)).toBe(true);
   });
 
+  it('1,000 due deliveries claimed by two workers on separate pools: no duplicate, none missing', async () => {
+    const culture = await created<Culture>(call('POST', '/api/cultures', { name: 'Bramble' }));
+    const past = new Date(Date.now() - HOUR);
+    const alerts = await t.db
+      .insertInto('alert')
+      .values(
+        Array.from({ length: 1000 }, (_, i) => ({
+          accountId: theo.account.id,
+          kind: 'feeding-due',
+          subjectType: 'culture',
+          cultureId: culture.id,
+          slotKey: `race:${i}`,
+          dueAt: past,
+          staleAt: new Date(Date.now() + HOUR),
+          title: 'Bramble is due a feeding',
+          body: 'Race test.',
+          linkPath: `/cultures/${culture.id}`,
+        })),
+      )
+      .returning('id')
+      .execute();
+    const deliveries = await t.db
+      .insertInto('alertDelivery')
+      .values(alerts.map((a) => ({ alertId: a.id, channel: 'email', sendAfter: past })))
+      .returning('id')
+      .execute();
+    const ids = deliveries.map((d) => d.id);
+    const at = new Date();
+    // Each worker walks every id (the second in reverse, so they meet in the middle and collide).
+    const work = async (repo: AlertRepository, order: string[]) => {
+      const won: string[] = [];
+      for (const id of order) if (await repo.claim(id, at, CLAIM_TIMEOUT_SECONDS)) won.push(id);
+      return won;
+    };
+    const [a, b] = await Promise.all([
+      work(new AlertRepository(t.db), ids),
+      work(new AlertRepository(other.db), [...ids].reverse()),
+    ]);
+    const all = [...a, ...b];
+    expect(new Set(all).size).toBe(all.length); // 0 duplicates
+    expect(all.length).toBe(1000); // 0 missing
+  });
+
   it('a claim left by a dead worker is taken over after the timeout, and a sent delivery never again', async () => {
     const [id] = await pendingDeliveries();
     const repo = new AlertRepository(t.db);

@@ -131,6 +131,41 @@ describe('scheduling and in-app delivery', () => {
     expect(inApp[0]!.sendAfter.getTime()).toBe(after[0]!.dueAt.getTime());
   });
 
+  it('rise checks that place the window move the pending alert to it, on the same row', async () => {
+    await setPrefs({ leadMinutes: 0 });
+    const culture = await ok<Culture>(call('POST', '/api/cultures', { name: 'Bramble' }), 201);
+    const fedAt = Date.now() - 1.5 * HOUR;
+    const feeding = await ok<Feeding>(
+      call('POST', `/api/cultures/${culture.id}/feedings`, {
+        ...{ starterG: 20, flourG: 40, waterG: 40, temperatureC: 24, initialHeightMm: 50 },
+        fedAt: new Date(fedAt).toISOString(),
+      }),
+      201,
+    );
+    const [before] = await alertRows('culture-ready');
+    // A quick climb (invented heights, mm): the jar's own checks now place the window.
+    for (const [h, mm] of [
+      [0.5, 52],
+      [1, 60],
+      [1.5, 72],
+    ] as const) {
+      await ok(
+        call('POST', `/api/feedings/${feeding.id}/rise-checks`, {
+          takenAt: new Date(fedAt + h * HOUR).toISOString(),
+          heightMm: mm,
+        }),
+        201,
+      );
+    }
+    const s = await ok<CultureSummary>(call('GET', `/api/cultures/${culture.id}/summary`));
+    const after = await alertRows('culture-ready');
+    expect(after).toHaveLength(1);
+    expect(after[0]!.id).toBe(before!.id);
+    const expected = s.running?.readyFrom ?? s.forecast!.low;
+    expect(after[0]!.dueAt.toISOString()).toBe(new Date(expected).toISOString());
+    expect(after[0]!.dueAt.getTime()).not.toBe(before!.dueAt.getTime());
+  });
+
   it('quiet hours hold the e-mail but not the in-app alert', async () => {
     const now = new Date();
     const hhmm = (d: Date) => d.toISOString().slice(11, 16);

@@ -63,6 +63,8 @@ export class RiseCheckService {
   }
 
   async delete(account: AccountRecord, id: string): Promise<void> {
+    const { feedingId } = await this.requireOwned(account, id);
     if (!(await this.checks.delete(account.id, id))) throw new NotFoundException('No rise check with this id.');
+    await this.alerts.refreshFeeding(feedingId);
   }
 }
