@@ -27,6 +27,19 @@ function createAppRouter() {
             },
           ],
         },
+        // Public either way: a reset link must work even in a browser still signed in.
+        {
+          path: 'forgot-password',
+          lazy: async () => ({ Component: (await import('./routes/forgot-password')).ForgotPasswordRoute }),
+        },
+        {
+          path: 'reset-password',
+          lazy: async () => ({ Component: (await import('./routes/reset-password')).ResetPasswordRoute }),
+        },
+        {
+          path: 'dev/mail',
+          lazy: async () => ({ Component: (await import('./routes/dev-mail')).DevMailRoute }),
+        },
         {
           element: <RequireAuth />,
           children: [

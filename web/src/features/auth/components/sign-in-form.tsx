@@ -1,7 +1,9 @@
 import type { SignInRequest } from '@peakwise/shared';
 import Button from '@mui/material/Button';
+import Link from '@mui/material/Link';
 import Stack from '@mui/material/Stack';
 import { useForm } from 'react-hook-form';
+import { Link as RouterLink } from 'react-router-dom';
 import { FormAlert } from '@/components/form/form-alert';
 import { FormTextField } from '@/components/form/form-text-field';
 import { PasswordField } from '@/components/form/password-field';
@@ -44,6 +46,9 @@ export function SignInForm() {
         autoComplete="current-password"
         rules={{ required: 'Enter your password.' }}
       />
+      <Link component={RouterLink} to="/forgot-password" variant="body2" sx={{ alignSelf: 'flex-end' }}>
+        Forgot password?
+      </Link>
       <FormAlert message={formState.errors.root?.server?.message} />
       <Button type="submit" variant="contained" size="large" loading={formState.isSubmitting}>
         Sign in
