@@ -51,7 +51,14 @@ export class AlertScheduler {
       const now = this.clock.now();
       const prefs = await this.preferencesOf(accountId);
       const summary = computeSummary(toCulture(row), historyOf(await this.history.history(cultureId)), now);
-      const wanted = cultureAlerts({ accountId, summary, leadMinutes: prefs.leadMinutes, now: now.toISOString() });
+      const timeZone = (await this.alerts.recipient(accountId))?.timeZone ?? 'UTC';
+      const wanted = cultureAlerts({
+        accountId,
+        summary,
+        leadMinutes: prefs.leadMinutes,
+        now: now.toISOString(),
+        timeZone,
+      });
       await this.sync(accountId, { cultureId }, wanted, prefs);
     });
   }

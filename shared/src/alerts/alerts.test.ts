@@ -41,30 +41,39 @@ const byKind = <T extends { kind: string }>(alerts: T[], kind: string): T | unde
 
 describe('cultureAlerts', () => {
   it('puts the ready alert at the window start minus the lead, past peak at its end, feeding a day after', () => {
-    const alerts = cultureAlerts({ accountId: 'a1', summary: summary(), leadMinutes: 20, now: FED });
+    const alerts = cultureAlerts({
+      accountId: 'a1',
+      summary: summary(),
+      leadMinutes: 20,
+      now: FED,
+      timeZone: 'Europe/London',
+    });
     expect(byKind(alerts, 'culture-ready')?.dueAt).toBe('2026-12-05T12:40:00.000Z');
     expect(byKind(alerts, 'past-peak')?.dueAt).toBe('2026-12-05T15:00:00.000Z');
+    // London is on UTC in December; 5 Dec 2026 is a Saturday.
+    expect(byKind(alerts, 'culture-ready')?.body).toMatch(/^Ready from Sat 13:00/);
     // Daily on the counter: common practice for a starter kept warm.
     expect(byKind(alerts, 'feeding-due')?.dueAt).toBe('2026-12-06T08:00:00.000Z');
   });
 
   it('gives the same slot key when the prediction moves, so the alert is moved and not duplicated', () => {
-    const first = cultureAlerts({ accountId: 'a1', summary: summary(), leadMinutes: 0, now: FED });
+    const first = cultureAlerts({ accountId: 'a1', summary: summary(), leadMinutes: 0, now: FED, timeZone: 'UTC' });
     const moved = cultureAlerts({
       accountId: 'a1',
       summary: summary({ readyFrom: '2026-12-05T14:10:00.000Z' }),
       leadMinutes: 0,
       now: FED,
+      timeZone: 'UTC',
     });
     expect(byKind(moved, 'culture-ready')?.slotKey).toBe(byKind(first, 'culture-ready')?.slotKey);
     expect(byKind(moved, 'culture-ready')?.dueAt).not.toBe(byKind(first, 'culture-ready')?.dueAt);
   });
 
   it('keys alerts by feeding, so the next feeding makes new ones', () => {
-    const a = cultureAlerts({ accountId: 'a1', summary: summary(), leadMinutes: 0, now: FED });
+    const a = cultureAlerts({ accountId: 'a1', summary: summary(), leadMinutes: 0, now: FED, timeZone: 'UTC' });
     const s = summary();
     s.running = { ...s.running!, feeding: { ...s.running!.feeding, id: 'f2' } };
-    const b = cultureAlerts({ accountId: 'a1', summary: s, leadMinutes: 0, now: FED });
+    const b = cultureAlerts({ accountId: 'a1', summary: s, leadMinutes: 0, now: FED, timeZone: 'UTC' });
     expect(new Set([...a, ...b].map((x) => x.slotKey)).size).toBe(a.length + b.length);
   });
 
@@ -74,6 +83,7 @@ describe('cultureAlerts', () => {
       summary: summary({ location: 'fridge' }),
       leadMinutes: 0,
       now: FED,
+      timeZone: 'UTC',
     });
     expect(alerts.map((a) => a.kind)).toEqual(['feeding-due']);
     expect(alerts[0]?.dueAt).toBe('2026-12-12T08:00:00.000Z');
@@ -84,11 +94,19 @@ describe('cultureAlerts', () => {
       Date.parse('2026-12-05T15:00:00.000Z') + (PAST_PEAK_STALE_HOURS + 1) * 3_600_000,
     ).toISOString();
     expect(
-      cultureAlerts({ accountId: 'a1', summary: summary(), leadMinutes: 0, now: late }).map((a) => a.kind),
+      cultureAlerts({ accountId: 'a1', summary: summary(), leadMinutes: 0, now: late, timeZone: 'UTC' }).map(
+        (a) => a.kind,
+      ),
     ).toEqual(['feeding-due']);
-    expect(cultureAlerts({ accountId: 'a1', summary: summary({ archived: true }), leadMinutes: 0, now: FED })).toEqual(
-      [],
-    );
+    expect(
+      cultureAlerts({
+        accountId: 'a1',
+        summary: summary({ archived: true }),
+        leadMinutes: 0,
+        now: FED,
+        timeZone: 'UTC',
+      }),
+    ).toEqual([]);
   });
 });
 

@@ -30,6 +30,8 @@ export interface CultureAlertInput {
   /** Minutes before the ready window starts that the culture-ready alert comes. */
   leadMinutes: number;
   now: string;
+  /** The baker's IANA zone: times in the words are local, e.g. "Wed 14:20". */
+  timeZone: string;
 }
 
 /** The ready window: from the rise checks when they place it, else the forecast's 80 % interval. */
@@ -50,6 +52,13 @@ export function readyWindow(
 }
 
 const iso = (ms: number): string => new Date(ms).toISOString();
+
+/** "Wed 14:20" in the baker's zone (24-hour clock, as the rest of the app shows times). */
+export function localTime(ms: number, timeZone: string): string {
+  return new Intl.DateTimeFormat('en-GB', { timeZone, weekday: 'short', hour: '2-digit', minute: '2-digit' }).format(
+    ms,
+  );
+}
 
 /** Alerts the culture wants now; an alert already stale at `now` is left out. */
 export function cultureAlerts(input: CultureAlertInput): WantedAlert[] {
@@ -93,7 +102,10 @@ export function cultureAlerts(input: CultureAlertInput): WantedAlert[] {
       dueAt: iso(Math.min(window.from - input.leadMinutes * MS_PER_MINUTE, readyStale)),
       staleAt: iso(readyStale),
       title: `${culture.name} will be ready soon`,
-      body: 'Its ready window starts soon: plan to mix or feed while it is near its peak.',
+      body:
+        `Ready from ${localTime(window.from, input.timeZone)}` +
+        (window.peak !== null ? `, peak around ${localTime(window.peak, input.timeZone)}` : '') +
+        ': plan to mix or feed while it is near its peak.',
     });
     if (window.until !== null) {
       out.push({
@@ -103,7 +115,7 @@ export function cultureAlerts(input: CultureAlertInput): WantedAlert[] {
         dueAt: iso(window.until),
         staleAt: iso(window.until + PAST_PEAK_STALE_HOURS * MS_PER_HOUR),
         title: `${culture.name} is past its peak`,
-        body: 'The ready window has ended: use it soon or feed it again.',
+        body: `The ready window ended at ${localTime(window.until, input.timeZone)}: use it soon or feed it again.`,
       });
     }
   }

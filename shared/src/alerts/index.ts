@@ -3,6 +3,7 @@ export type { WantedAlert } from './types.js';
 export {
   cultureAlerts,
   readyWindow,
+  localTime,
   FEEDING_ROUTINE_HOURS,
   PAST_PEAK_STALE_HOURS,
   FEEDING_DUE_STALE_HOURS,
