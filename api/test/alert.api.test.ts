@@ -1,5 +1,7 @@
 import type { Alert, AlertListResponse, Culture, CultureSummary, Feeding } from '@peakwise/shared';
-import { afterAll, beforeAll, beforeEach, describe, expect, it } from 'vitest';
+import { afterAll, beforeAll, beforeEach, describe, expect, it, vi } from 'vitest';
+import { AlertRepository } from '../src/alert/alert.repository.js';
+import { AlertWorker } from '../src/alert/alert.worker.js';
 import type { FakeSmtp } from '../src/dev/fake-smtp.js';
 import { expectError, expectFieldErrors, send, signUp, type InjectResponse, type SignedUp } from './helpers.js';
 import { mailConfig, startTestMailbox } from './mail-fixture.js';
@@ -206,6 +208,50 @@ describe('scheduling and in-app delivery', () => {
       { kind: 'feeding-due', status: 'pending' },
       { kind: 'past-peak', status: 'cancelled' },
     ]);
+  });
+});
+
+describe('the window that cannot be closed', () => {
+  it('mail accepted, then a crash before recording it: one duplicate with the same Message-ID, then never again', async () => {
+    const culture = await ok<Culture>(call('POST', '/api/cultures', { name: 'Bramble' }), 201);
+    const past = new Date(Date.now() - HOUR);
+    const alert = await t.db
+      .insertInto('alert')
+      .values({
+        ...{ accountId: theo.account.id, kind: 'feeding-due', subjectType: 'culture', cultureId: culture.id },
+        ...{
+          slotKey: 'crash:1',
+          dueAt: past,
+          staleAt: new Date(Date.now() + HOUR),
+          linkPath: `/cultures/${culture.id}`,
+        },
+        ...{ title: 'Bramble is due a feeding', body: 'Crash test.' },
+      })
+      .returning('id')
+      .executeTakeFirstOrThrow();
+    const delivery = await t.db
+      .insertInto('alertDelivery')
+      .values({ alertId: alert.id, channel: 'email', sendAfter: past })
+      .returning('id')
+      .executeTakeFirstOrThrow();
+    const worker = t.app.get(AlertWorker);
+    // The SMTP server accepts the message, then recording it fails (the process "dies" there).
+    const markSent = vi.spyOn(t.app.get(AlertRepository), 'markSent').mockRejectedValueOnce(new Error('crash'));
+    await expect(worker.deliver({ deliveryId: delivery.id })).rejects.toThrow('crash');
+    markSent.mockRestore();
+    await worker.deliver({ deliveryId: delivery.id }); // the retry sends it again and records it
+    await worker.deliver({ deliveryId: delivery.id }); // recorded: nothing more
+    const mails = mailbox.messages();
+    expect(mails).toHaveLength(2);
+    expect(mails[0]!.messageId).not.toBeNull();
+    expect(mails[0]!.messageId).toBe(mails[1]!.messageId);
+    const row = await t.db
+      .selectFrom('alertDelivery')
+      .selectAll()
+      .where('id', '=', delivery.id)
+      .executeTakeFirstOrThrow();
+    expect(row.sentAt).not.toBeNull();
+    expect(row.attempts).toBe(2);
   });
 });
 
