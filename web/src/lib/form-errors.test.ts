@@ -1,7 +1,7 @@
 import type { ErrorResponse } from '@peakwise/shared';
-import { describe, expect, it } from 'vitest';
+import { describe, expect, it, vi } from 'vitest';
 import { ApiError } from './api-client';
-import { mapServerErrors } from './form-errors';
+import { applyMappedServerErrors, mapServerErrors } from './form-errors';
 
 const fields = ['email', 'displayName', 'password'] as const;
 
@@ -65,5 +65,27 @@ describe('mapServerErrors', () => {
       fieldErrors: [],
       formMessage: 'Something went wrong. Please try again.',
     });
+  });
+});
+
+describe('applyMappedServerErrors', () => {
+  it("puts each API field's message on the form field it maps to, focusing the first, and the rest above", () => {
+    const setError = vi.fn();
+    const error = apiError({
+      details: [
+        { field: 'temperatureC', message: 'Enter a temperature from -10 to 50 °C.' },
+        { field: 'fedAt', message: 'Enter a time that is not in the future.' },
+        { field: 'culture', message: 'This culture is archived.' },
+      ],
+    });
+    applyMappedServerErrors<{ temperature: string; fedAt: string }>(error, setError, {
+      temperatureC: 'temperature',
+      fedAt: 'fedAt',
+    });
+    expect(setError.mock.calls).toEqual([
+      ['temperature', { type: 'server', message: 'Enter a temperature from -10 to 50 °C.' }, { shouldFocus: true }],
+      ['fedAt', { type: 'server', message: 'Enter a time that is not in the future.' }, { shouldFocus: false }],
+      ['root.server', { type: 'server', message: 'This culture is archived.' }],
+    ]);
   });
 });

@@ -50,3 +50,17 @@ export function applyServerErrors<T extends FieldValues>(
   });
   if (formMessage !== null) setError(SERVER_ERROR_KEY, { type: 'server', message: formMessage });
 }
+
+/** applyServerErrors for a form whose fields are named unlike the API's: `fieldOf` maps API field → form field. */
+export function applyMappedServerErrors<T extends FieldValues>(
+  error: unknown,
+  setError: UseFormSetError<T>,
+  fieldOf: Readonly<Record<string, Path<T>>>,
+): void {
+  const { fieldErrors, formMessage } = mapServerErrors(error, Object.keys(fieldOf));
+  fieldErrors.forEach(({ field, message }, index) => {
+    const name = fieldOf[field];
+    if (name) setError(name, { type: 'server', message }, { shouldFocus: index === 0 });
+  });
+  if (formMessage !== null) setError(SERVER_ERROR_KEY, { type: 'server', message: formMessage });
+}

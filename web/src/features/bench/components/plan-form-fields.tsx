@@ -2,7 +2,6 @@ import type { Account, Culture, FormulaListItem } from '@peakwise/shared';
 import Card from '@mui/material/Card';
 import CardContent from '@mui/material/CardContent';
 import FormControlLabel from '@mui/material/FormControlLabel';
-import InputAdornment from '@mui/material/InputAdornment';
 import Link from '@mui/material/Link';
 import Stack from '@mui/material/Stack';
 import Switch from '@mui/material/Switch';
@@ -13,12 +12,10 @@ import type { ReactNode } from 'react';
 import { Controller, useWatch, type Control } from 'react-hook-form';
 import { Link as RouterLink } from 'react-router-dom';
 import { FormTextField } from '@/components/form/form-text-field';
+import { unitSlotProps } from '@/components/form/unit-slot-props';
 import { bigToggleSx } from '@/components/logbook/toggle-sx';
 import type { PlanFormValues } from '../utils/plan-form';
 
-const unit = (u: string) => ({ input: { endAdornment: <InputAdornment position="end">{u}</InputAdornment> } });
-const decimal = { inputMode: 'decimal' as const };
-const whole = { inputMode: 'numeric' as const };
 const shrink = { inputLabel: { shrink: true } };
 
 function Section({ title, children }: { title: string; children: ReactNode }) {
@@ -163,20 +160,20 @@ export function PlanFormFields({ control, account, formulas, cultures }: Props) 
           name="doughTemperature"
           label="Dough temperature during bulk"
           helperText="Where the dough will sit; warmer dough ferments faster."
-          slotProps={{ ...unit(tUnit), htmlInput: decimal }}
+          slotProps={unitSlotProps(tUnit)}
         />
         <Stack direction="row" spacing={1}>
           <FormTextField
             control={control}
             name="foldSets"
             label="Stretch-and-fold sets"
-            slotProps={{ ...unit('sets'), htmlInput: whole }}
+            slotProps={unitSlotProps('sets', 'numeric')}
           />
           <FormTextField
             control={control}
             name="foldInterval"
             label="Every"
-            slotProps={{ ...unit('min'), htmlInput: whole }}
+            slotProps={unitSlotProps('min', 'numeric')}
           />
         </Stack>
       </Section>
@@ -211,7 +208,7 @@ export function PlanFormFields({ control, account, formulas, cultures }: Props) 
             name="proofHours"
             label="Final proof"
             helperText="Leave empty to let Peakwise work it out from the bulk."
-            slotProps={{ ...unit('h'), htmlInput: decimal }}
+            slotProps={unitSlotProps('h')}
           />
         ) : (
           <>
@@ -219,21 +216,16 @@ export function PlanFormFields({ control, account, formulas, cultures }: Props) 
               control={control}
               name="fridgeTemperature"
               label="Fridge temperature"
-              slotProps={{ ...unit(tUnit), htmlInput: decimal }}
+              slotProps={unitSlotProps(tUnit)}
             />
             <Stack direction="row" spacing={1}>
               <FormTextField
                 control={control}
                 name="retardMinHours"
                 label="In the fridge at least"
-                slotProps={{ ...unit('h'), htmlInput: decimal }}
+                slotProps={unitSlotProps('h')}
               />
-              <FormTextField
-                control={control}
-                name="retardMaxHours"
-                label="At most"
-                slotProps={{ ...unit('h'), htmlInput: decimal }}
-              />
+              <FormTextField control={control} name="retardMaxHours" label="At most" slotProps={unitSlotProps('h')} />
             </Stack>
           </>
         )}
@@ -241,20 +233,20 @@ export function PlanFormFields({ control, account, formulas, cultures }: Props) 
           control={control}
           name="ovenTemperature"
           label="Oven temperature"
-          slotProps={{ ...unit(tUnit), htmlInput: decimal }}
+          slotProps={unitSlotProps(tUnit)}
         />
         <Stack direction="row" spacing={1}>
           <FormTextField
             control={control}
             name="bakeMinMinutes"
             label="Bake from"
-            slotProps={{ ...unit('min'), htmlInput: whole }}
+            slotProps={unitSlotProps('min', 'numeric')}
           />
           <FormTextField
             control={control}
             name="bakeMaxMinutes"
             label="To"
-            slotProps={{ ...unit('min'), htmlInput: whole }}
+            slotProps={unitSlotProps('min', 'numeric')}
           />
         </Stack>
       </Section>

@@ -1,17 +1,14 @@
 import { GRAMS_MAX, type Account, type Feeding } from '@peakwise/shared';
-import Alert from '@mui/material/Alert';
 import Button from '@mui/material/Button';
-import InputAdornment from '@mui/material/InputAdornment';
 import Stack from '@mui/material/Stack';
 import Typography from '@mui/material/Typography';
 import { useState } from 'react';
-import { Controller, useForm, useWatch } from 'react-hook-form';
+import { useForm, useWatch } from 'react-hook-form';
 import { FormAlert } from '@/components/form/form-alert';
 import { FormTextField } from '@/components/form/form-text-field';
-import { DISCOLOURATION_CAUTION } from '@/components/logbook/cautions';
-import { ObservationChips } from '@/components/logbook/observation-chips';
-import { heightUnit, parseNumber } from '@/lib/format/units';
-import { mapServerErrors } from '@/lib/form-errors';
+import { ConditionFields, GramsFields, ObservationFields } from '@/components/logbook/feeding-fields';
+import { parseNumber } from '@/lib/format/units';
+import { applyMappedServerErrors } from '@/lib/form-errors';
 import {
   FEEDING_FIELD_OF,
   feedingChanges,
@@ -20,9 +17,6 @@ import {
 } from '@/lib/logbook/feeding-form';
 import { useUpdateFeeding } from '../api/update-feeding';
 import { ratioWords } from '../utils/feeding-words';
-
-const unit = (u: string) => ({ input: { endAdornment: <InputAdornment position="end">{u}</InputAdornment> } });
-const decimal = { inputMode: 'decimal' as const };
 
 // A correction must keep the three weights: an emptied field would otherwise be left out of the
 // PATCH and silently keep its old value. The range is the API's; it stays the authority.
@@ -47,10 +41,7 @@ export function EditFeedingForm({ feeding, account, onSaved, onCancel }: EditFee
   const update = useUpdateFeeding(feeding.id);
   const [recorded] = useState(() => valuesFromFeeding(feeding, account));
   const { control, handleSubmit, setError, formState } = useForm<FeedingFormValues>({ defaultValues: recorded });
-  const [starterG, flourG, waterG, observations] = useWatch({
-    control,
-    name: ['starterG', 'flourG', 'waterG', 'observations'],
-  });
+  const [starterG, flourG, waterG] = useWatch({ control, name: ['starterG', 'flourG', 'waterG'] });
   const grams = [starterG, flourG, waterG].map(parseNumber);
   const ratio =
     grams.every((g) => g !== null && g > 0) &&
@@ -63,12 +54,7 @@ export function EditFeedingForm({ feeding, account, onSaved, onCancel }: EditFee
       await update.mutateAsync(changes);
       onSaved();
     } catch (error) {
-      const { fieldErrors, formMessage } = mapServerErrors(error, Object.keys(FEEDING_FIELD_OF));
-      fieldErrors.forEach(({ field, message }, index) => {
-        const name = FEEDING_FIELD_OF[field];
-        if (name) setError(name, { type: 'server', message }, { shouldFocus: index === 0 });
-      });
-      if (formMessage !== null) setError('root.server', { type: 'server', message: formMessage });
+      applyMappedServerErrors(error, setError, FEEDING_FIELD_OF);
     }
   });
 
@@ -83,53 +69,14 @@ export function EditFeedingForm({ feeding, account, onSaved, onCancel }: EditFee
         slotProps={{ inputLabel: { shrink: true } }}
       />
       <Stack spacing={1}>
-        <Stack direction="row" spacing={1}>
-          {(['starterG', 'flourG', 'waterG'] as const).map((name) => (
-            <FormTextField
-              key={name}
-              control={control}
-              name={name}
-              rules={gramsRules}
-              label={{ starterG: 'Starter', flourG: 'Flour', waterG: 'Water' }[name]}
-              slotProps={{ ...unit('g'), htmlInput: decimal }}
-            />
-          ))}
-        </Stack>
+        <GramsFields control={control} rules={gramsRules} />
         <Typography variant="body2" color="text.secondary" aria-live="polite">
           {ratio ? `Ratio ${ratio} (starter : flour : water)` : 'Enter all three weights to see the ratio.'}
         </Typography>
       </Stack>
       <FormTextField control={control} name="flour" label="Flour or blend" />
-      <Stack direction="row" spacing={1}>
-        <FormTextField
-          control={control}
-          name="temperature"
-          label="Room or jar temperature"
-          slotProps={{ ...unit(`°${account.temperatureUnit}`), htmlInput: decimal }}
-        />
-        <FormTextField
-          control={control}
-          name="initialHeight"
-          label="Height after feeding"
-          helperText="From the jar’s base"
-          slotProps={{ ...unit(heightUnit(account.unitSystem)), htmlInput: decimal }}
-        />
-      </Stack>
-      <Stack spacing={1}>
-        <Typography variant="h3" component="h3">
-          What you noticed
-        </Typography>
-        <Controller
-          control={control}
-          name="observations"
-          render={({ field }) => <ObservationChips value={field.value} onChange={field.onChange} />}
-        />
-      </Stack>
-      {observations.includes('discolouration') && (
-        <Alert severity="error" role="alert">
-          {DISCOLOURATION_CAUTION}
-        </Alert>
-      )}
+      <ConditionFields control={control} account={account} heightLabel="Height after feeding" />
+      <ObservationFields control={control} heading="h3" />
       <FormTextField control={control} name="notes" label="Notes" multiline minRows={2} />
       <FormAlert message={formState.errors.root?.server?.message} />
       <Stack direction="row" spacing={1}>

@@ -11,7 +11,7 @@ import { useForm } from 'react-hook-form';
 import { FormAlert } from '@/components/form/form-alert';
 import { FormTextField } from '@/components/form/form-text-field';
 import { formatHeight, heightUnit } from '@/lib/format/units';
-import { mapServerErrors } from '@/lib/form-errors';
+import { applyMappedServerErrors } from '@/lib/form-errors';
 import { useUpdateRiseCheck } from '../api/update-rise-check';
 import { riseCheckChanges, riseCheckValues, type RiseCheckEditValues } from '../utils/rise-check-edit';
 
@@ -48,12 +48,7 @@ export function RiseCheckDialog({ check, feeding, account, onClose }: RiseCheckD
       await update.mutateAsync({ id: check.id, body });
       onClose();
     } catch (error) {
-      const { fieldErrors, formMessage } = mapServerErrors(error, Object.keys(FIELD_OF));
-      fieldErrors.forEach(({ field, message }, index) => {
-        const name = FIELD_OF[field];
-        if (name) setError(name, { type: 'server', message }, { shouldFocus: index === 0 });
-      });
-      if (formMessage !== null) setError('root.server', { type: 'server', message: formMessage });
+      applyMappedServerErrors(error, setError, FIELD_OF);
     }
   });
 

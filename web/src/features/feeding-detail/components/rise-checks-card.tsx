@@ -14,16 +14,15 @@ import { useQuery } from '@tanstack/react-query';
 import { useState } from 'react';
 import { LoadError } from '@/components/feedback/load-error';
 import { VisuallyHidden } from '@/components/visually-hidden';
-import { formatDuration } from '@/lib/format/duration';
 import { formatHeight } from '@/lib/format/units';
 import { riseChecksQueryOptions } from '@/lib/logbook/get-rise-checks';
 import { useDeleteRiseCheck } from '../api/delete-rise-check';
-import { hoursAfter, readingTime, risePct } from '../utils/feeding-words';
-import { ConfirmDialog } from './confirm-dialog';
+import { readingTime, risePct } from '../utils/feeding-words';
+import { DeleteConfirm } from './delete-confirm';
 import { RiseCheckDialog } from './rise-check-dialog';
+import { secondary, TakenCell } from './taken-cell';
 
 const riseWords = (pct: number | null) => (pct === null ? '—' : `${pct > 0 ? '+' : ''}${pct} %`);
-const secondary = { display: 'block', color: 'text.secondary', fontSize: '0.8rem' } as const;
 
 /** The feeding's rise checks, oldest first, each to correct or remove. */
 export function RiseChecksCard({ feeding, account }: { feeding: Feeding; account: Account }) {
@@ -59,12 +58,7 @@ export function RiseChecksCard({ feeding, account }: { feeding: Feeding; account
             <TableBody>
               {checks.data.items.map((c) => (
                 <TableRow key={c.id}>
-                  <TableCell>
-                    {time(c)}
-                    <Typography component="span" sx={secondary}>
-                      +{formatDuration(hoursAfter(feeding.fedAt, c.takenAt))}
-                    </Typography>
-                  </TableCell>
+                  <TakenCell time={time(c)} takenAt={c.takenAt} fedAt={feeding.fedAt} />
                   <TableCell align="right">
                     {formatHeight(c.heightMm, account.unitSystem)}
                     {c.temperatureC !== null && (
@@ -96,16 +90,16 @@ export function RiseChecksCard({ feeding, account }: { feeding: Feeding; account
       {editing && (
         <RiseCheckDialog check={editing} feeding={feeding} account={account} onClose={() => setEditing(null)} />
       )}
-      <ConfirmDialog
-        open={deleting !== null}
+      <DeleteConfirm
+        entry={deleting}
         title="Delete this rise check?"
         confirmLabel="Delete rise check"
-        onConfirm={() => remove.mutateAsync(deleting!.id)}
+        describe={(c) =>
+          `The reading at ${time(c)} (${formatHeight(c.heightMm, account.unitSystem)}) goes, and the rise is fitted again without it.`
+        }
+        remove={(id) => remove.mutateAsync(id)}
         onClose={() => setDeleting(null)}
-      >
-        {deleting &&
-          `The reading at ${time(deleting)} (${formatHeight(deleting.heightMm, account.unitSystem)}) goes, and the rise is fitted again without it.`}
-      </ConfirmDialog>
+      />
     </Card>
   );
 }

@@ -8,7 +8,7 @@ import { useForm } from 'react-hook-form';
 import { FormAlert } from '@/components/form/form-alert';
 import { FormTextField } from '@/components/form/form-text-field';
 import { toLocalInput } from '@/lib/format/local-input';
-import { mapServerErrors } from '@/lib/form-errors';
+import { applyMappedServerErrors } from '@/lib/form-errors';
 import { useIdempotencyKey } from '@/lib/idempotency';
 import { useCreateTemperature } from '../api/create-temperature';
 import { toNewReading, type TemperatureEntryValues } from '../utils/temperature-entry';
@@ -42,12 +42,7 @@ export function TemperatureEntryForm({ feedingId, account }: { feedingId: string
       reset({ takenAt: now, temperature: '' });
     } catch (error) {
       idempotency.settle(error);
-      const { fieldErrors, formMessage } = mapServerErrors(error, Object.keys(FIELD_OF));
-      fieldErrors.forEach(({ field, message }, index) => {
-        const name = FIELD_OF[field];
-        if (name) setError(name, { type: 'server', message }, { shouldFocus: index === 0 });
-      });
-      if (formMessage !== null) setError('root.server', { type: 'server', message: formMessage });
+      applyMappedServerErrors(error, setError, FIELD_OF);
     }
   });
 

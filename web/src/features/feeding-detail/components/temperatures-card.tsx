@@ -12,14 +12,12 @@ import Typography from '@mui/material/Typography';
 import { useState } from 'react';
 import { LoadError } from '@/components/feedback/load-error';
 import { VisuallyHidden } from '@/components/visually-hidden';
-import { formatDuration } from '@/lib/format/duration';
 import { useDeleteTemperature } from '../api/delete-temperature';
 import { useTemperatures } from '../api/get-temperatures';
-import { hoursAfter, readingTime } from '../utils/feeding-words';
-import { ConfirmDialog } from './confirm-dialog';
+import { readingTime } from '../utils/feeding-words';
+import { DeleteConfirm } from './delete-confirm';
+import { TakenCell } from './taken-cell';
 import { TemperatureEntryForm } from './temperature-entry-form';
-
-const secondary = { display: 'block', color: 'text.secondary', fontSize: '0.8rem' } as const;
 
 /** The feeding's temperature readings (typed in by hand for now): list, add, remove. */
 export function TemperaturesCard({ feeding, account }: { feeding: Feeding; account: Account }) {
@@ -59,12 +57,7 @@ export function TemperaturesCard({ feeding, account }: { feeding: Feeding; accou
             <TableBody>
               {readings.data.items.map((r) => (
                 <TableRow key={r.id}>
-                  <TableCell>
-                    {time(r)}
-                    <Typography component="span" sx={secondary}>
-                      +{formatDuration(hoursAfter(feeding.fedAt, r.takenAt))}
-                    </Typography>
-                  </TableCell>
+                  <TakenCell time={time(r)} takenAt={r.takenAt} fedAt={feeding.fedAt} />
                   <TableCell align="right">{degrees(r)}</TableCell>
                   <TableCell align="right" sx={{ px: 0 }}>
                     <IconButton aria-label={`Delete reading at ${time(r)}`} onClick={() => setDeleting(r)}>
@@ -78,15 +71,14 @@ export function TemperaturesCard({ feeding, account }: { feeding: Feeding; accou
         )}
         <TemperatureEntryForm feedingId={feeding.id} account={account} />
       </CardContent>
-      <ConfirmDialog
-        open={deleting !== null}
+      <DeleteConfirm
+        entry={deleting}
         title="Delete this reading?"
         confirmLabel="Delete reading"
-        onConfirm={() => remove.mutateAsync(deleting!.id)}
+        describe={(r) => `The ${degrees(r)} reading at ${time(r)} goes.`}
+        remove={(id) => remove.mutateAsync(id)}
         onClose={() => setDeleting(null)}
-      >
-        {deleting && `The ${degrees(deleting)} reading at ${time(deleting)} goes.`}
-      </ConfirmDialog>
+      />
     </Card>
   );
 }

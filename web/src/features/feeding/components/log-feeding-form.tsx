@@ -1,17 +1,14 @@
 import type { Account, Culture, Feeding } from '@peakwise/shared';
-import Alert from '@mui/material/Alert';
 import Button from '@mui/material/Button';
-import InputAdornment from '@mui/material/InputAdornment';
 import Stack from '@mui/material/Stack';
 import Typography from '@mui/material/Typography';
 import { useEffect, useState } from 'react';
 import { Controller, useForm, useWatch } from 'react-hook-form';
-import { DISCOLOURATION_CAUTION } from '@/components/logbook/cautions';
-import { ObservationChips } from '@/components/logbook/observation-chips';
 import { FormAlert } from '@/components/form/form-alert';
 import { FormTextField } from '@/components/form/form-text-field';
-import { heightUnit } from '@/lib/format/units';
-import { mapServerErrors } from '@/lib/form-errors';
+import { unitSlotProps } from '@/components/form/unit-slot-props';
+import { ConditionFields, GramsFields, ObservationFields } from '@/components/logbook/feeding-fields';
+import { applyMappedServerErrors } from '@/lib/form-errors';
 import { useIdempotencyKey } from '@/lib/idempotency';
 import { useCreateFeeding } from '../api/create-feeding';
 import {
@@ -22,9 +19,6 @@ import {
   type FeedingFormValues,
 } from '@/lib/logbook/feeding-form';
 import { RatioField } from './ratio-field';
-
-const unit = (u: string) => ({ input: { endAdornment: <InputAdornment position="end">{u}</InputAdornment> } });
-const decimal = { inputMode: 'decimal' as const };
 
 interface LogFeedingFormProps {
   culture: Culture;
@@ -42,9 +36,6 @@ export function LogFeedingForm({ culture, last, account, onSaved }: LogFeedingFo
     defaultValues: defaults,
   });
   const ratio = useWatch({ control, name: 'ratio' });
-  const observations = useWatch({ control, name: 'observations' });
-  const tUnit = `°${account.temperatureUnit}`;
-  const hUnit = heightUnit(account.unitSystem);
 
   const totalG = useWatch({ control, name: 'totalG' });
   // A preset and a total fill the three grams (the same split the API would make).
@@ -64,12 +55,7 @@ export function LogFeedingForm({ culture, last, account, onSaved }: LogFeedingFo
       onSaved(feeding);
     } catch (error) {
       idempotency.settle(error);
-      const { fieldErrors, formMessage } = mapServerErrors(error, Object.keys(FEEDING_FIELD_OF));
-      fieldErrors.forEach(({ field, message }, index) => {
-        const name = FEEDING_FIELD_OF[field];
-        if (name) setError(name, { type: 'server', message }, { shouldFocus: index === 0 });
-      });
-      if (formMessage !== null) setError('root.server', { type: 'server', message: formMessage });
+      applyMappedServerErrors(error, setError, FEEDING_FIELD_OF);
     }
   });
 
@@ -91,32 +77,10 @@ export function LogFeedingForm({ culture, last, account, onSaved }: LogFeedingFo
           name="totalG"
           label="Total in the jar after feeding"
           helperText="Starter, flour and water together"
-          slotProps={{ ...unit('g'), htmlInput: decimal }}
+          slotProps={unitSlotProps('g')}
         />
       )}
-      <Stack direction="row" spacing={1}>
-        <FormTextField
-          control={control}
-          name="starterG"
-          label="Starter"
-          slotProps={{ ...unit('g'), htmlInput: decimal }}
-          disabled={ratio !== 'custom'}
-        />
-        <FormTextField
-          control={control}
-          name="flourG"
-          label="Flour"
-          slotProps={{ ...unit('g'), htmlInput: decimal }}
-          disabled={ratio !== 'custom'}
-        />
-        <FormTextField
-          control={control}
-          name="waterG"
-          label="Water"
-          slotProps={{ ...unit('g'), htmlInput: decimal }}
-          disabled={ratio !== 'custom'}
-        />
-      </Stack>
+      <GramsFields control={control} disabled={ratio !== 'custom'} />
       <FormTextField control={control} name="flour" label="Flour or blend" />
       <FormTextField
         control={control}
@@ -126,36 +90,8 @@ export function LogFeedingForm({ culture, last, account, onSaved }: LogFeedingFo
         helperText="Now, unless you fed it earlier."
         slotProps={{ inputLabel: { shrink: true } }}
       />
-      <Stack direction="row" spacing={1}>
-        <FormTextField
-          control={control}
-          name="temperature"
-          label="Room or jar temperature"
-          slotProps={{ ...unit(tUnit), htmlInput: decimal }}
-        />
-        <FormTextField
-          control={control}
-          name="initialHeight"
-          label="Height in the jar now"
-          helperText="From the jar’s base"
-          slotProps={{ ...unit(hUnit), htmlInput: decimal }}
-        />
-      </Stack>
-      <Stack spacing={1}>
-        <Typography variant="h3" component="h2">
-          What you noticed
-        </Typography>
-        <Controller
-          control={control}
-          name="observations"
-          render={({ field }) => <ObservationChips value={field.value} onChange={field.onChange} />}
-        />
-      </Stack>
-      {observations.includes('discolouration') && (
-        <Alert severity="error" role="alert">
-          {DISCOLOURATION_CAUTION}
-        </Alert>
-      )}
+      <ConditionFields control={control} account={account} heightLabel="Height in the jar now" />
+      <ObservationFields control={control} heading="h2" />
       <FormTextField control={control} name="notes" label="Notes" multiline minRows={2} />
       <FormAlert message={formState.errors.root?.server?.message} />
       <Button type="submit" variant="contained" size="large" loading={formState.isSubmitting} sx={{ minHeight: 56 }}>

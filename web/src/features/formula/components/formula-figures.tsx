@@ -7,14 +7,17 @@ import TableBody from '@mui/material/TableBody';
 import TableCell from '@mui/material/TableCell';
 import TableHead from '@mui/material/TableHead';
 import TableRow from '@mui/material/TableRow';
-import ToggleButton from '@mui/material/ToggleButton';
-import ToggleButtonGroup from '@mui/material/ToggleButtonGroup';
 import Typography from '@mui/material/Typography';
 import type { FormulaComputed } from '@peakwise/shared';
 import { formatGrams, formatPercent } from '../utils/format';
-import { filledToggleSx } from '../utils/toggle-sx';
+import { ChoiceToggle } from './choice-toggle';
 
 export type FormulaViewMode = 'total' | 'final';
+
+const VIEW_CHOICES: { value: FormulaViewMode; label: string }[] = [
+  { value: 'total', label: 'Total formula' },
+  { value: 'final', label: 'Final dough' },
+];
 
 function Figure({ label, value, testId }: { label: string; value: string; testId: string }) {
   return (
@@ -60,19 +63,7 @@ export function FormulaFigures({ computed: c, view, onViewChange }: FormulaFigur
     <Card>
       <CardContent>
         <Stack spacing={2}>
-          <ToggleButtonGroup
-            exclusive
-            sx={filledToggleSx}
-            fullWidth
-            size="small"
-            color="primary"
-            aria-label="Percentages of"
-            value={view}
-            onChange={(_, v: FormulaViewMode | null) => v && onViewChange(v)}
-          >
-            <ToggleButton value="total">Total formula</ToggleButton>
-            <ToggleButton value="final">Final dough</ToggleButton>
-          </ToggleButtonGroup>
+          <ChoiceToggle label="Percentages of" value={view} options={VIEW_CHOICES} onChange={onViewChange} />
           <Box sx={{ display: 'grid', gridTemplateColumns: 'repeat(2, minmax(0, 1fr))', gap: 1.5 }}>
             <Figure
               label={total ? 'Total hydration' : 'Final-dough hydration'}

@@ -8,15 +8,13 @@ import TableBody from '@mui/material/TableBody';
 import TableCell from '@mui/material/TableCell';
 import TableHead from '@mui/material/TableHead';
 import TableRow from '@mui/material/TableRow';
-import ToggleButton from '@mui/material/ToggleButton';
-import ToggleButtonGroup from '@mui/material/ToggleButtonGroup';
 import Typography from '@mui/material/Typography';
 import type { FormulaScaledView, UnitSystem } from '@peakwise/shared';
 import { Controller, useWatch, type Control } from 'react-hook-form';
 import { FormTextField } from '@/components/form/form-text-field';
 import { formatFactor, formatGrams, ouncesFor } from '../utils/format';
 import type { FormulaFormValues, ScaleChoice } from '../utils/formula-form';
-import { filledToggleSx } from '../utils/toggle-sx';
+import { ChoiceToggle } from './choice-toggle';
 
 const decimal = { inputMode: 'decimal' as const };
 const end = (u: string) => ({ endAdornment: <InputAdornment position="end">{u}</InputAdornment> });
@@ -51,22 +49,7 @@ export function ScalingCard({ control, scaled, system }: ScalingCardProps) {
             control={control}
             name="scaling.by"
             render={({ field }) => (
-              <ToggleButtonGroup
-                exclusive
-                sx={filledToggleSx}
-                fullWidth
-                size="small"
-                color="primary"
-                aria-label="Scale by"
-                value={field.value}
-                onChange={(_, v: ScaleChoice | null) => v && field.onChange(v)}
-              >
-                {CHOICES.map((c) => (
-                  <ToggleButton key={c.value} value={c.value}>
-                    {c.label}
-                  </ToggleButton>
-                ))}
-              </ToggleButtonGroup>
+              <ChoiceToggle label="Scale by" value={field.value} options={CHOICES} onChange={field.onChange} />
             )}
           />
           {by === 'factor' && (

@@ -7,8 +7,6 @@ import FormControlLabel from '@mui/material/FormControlLabel';
 import InputAdornment from '@mui/material/InputAdornment';
 import Stack from '@mui/material/Stack';
 import Switch from '@mui/material/Switch';
-import ToggleButton from '@mui/material/ToggleButton';
-import ToggleButtonGroup from '@mui/material/ToggleButtonGroup';
 import Typography from '@mui/material/Typography';
 import { useState } from 'react';
 import { Controller, useForm, useWatch } from 'react-hook-form';
@@ -26,9 +24,13 @@ import {
   type WaterFormValues,
 } from '../utils/water-temperature';
 import { FrictionCalibration } from './friction-calibration';
-import { filledToggleSx } from '../utils/toggle-sx';
+import { ChoiceToggle } from './choice-toggle';
 
 const decimal = { inputMode: 'decimal' as const };
+const METHOD_CHOICES: { value: MixingMethod; label: string }[] = [
+  ...MIXING_METHODS.map((m) => ({ value: m.id, label: m.label })),
+  { value: 'own', label: 'Your own' },
+];
 
 /**
  * Desired dough temperature → the water temperature to mix with (3 factors, or 4 with a levain),
@@ -83,28 +85,16 @@ export function WaterTemperaturePage() {
                 control={control}
                 name="method"
                 render={({ field }) => (
-                  <ToggleButtonGroup
-                    exclusive
-                    sx={filledToggleSx}
-                    fullWidth
-                    size="small"
-                    color="primary"
-                    aria-label="Mixing method"
+                  <ChoiceToggle
+                    label="Mixing method"
                     value={field.value}
-                    onChange={(_, v: MixingMethod | null) => {
-                      if (!v) return;
+                    options={METHOD_CHOICES}
+                    onChange={(v) => {
                       field.onChange(v);
                       const preset = presetFriction(v, unit);
                       if (preset !== null) setValue('friction', String(preset));
                     }}
-                  >
-                    {MIXING_METHODS.map((m) => (
-                      <ToggleButton key={m.id} value={m.id}>
-                        {m.label}
-                      </ToggleButton>
-                    ))}
-                    <ToggleButton value="own">Your own</ToggleButton>
-                  </ToggleButtonGroup>
+                  />
                 )}
               />
             </Box>
