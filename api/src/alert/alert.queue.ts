@@ -6,6 +6,8 @@ export const ALERT_DUE_QUEUE = 'alert-due';
 /** pg-boss keeps its tables here, apart from ours (sql/ never touches it). */
 export const ALERT_QUEUE_SCHEMA = 'pgboss';
 const DEFAULT_POLLING_SECONDS = 2;
+/** A queue that could not start (database down) tries again after this long. */
+const START_RETRY_MS = 15_000;
 
 export interface AlertDueJob {
   deliveryId: string;
@@ -23,7 +25,10 @@ export class AlertQueue implements OnApplicationBootstrap, OnApplicationShutdown
   private readonly logger = new Logger('AlertQueue');
   private readonly boss: PgBoss;
   private handler: Handler | null = null;
+  private afterStart: (() => Promise<void>) | null = null;
   private started: Promise<void> | null = null;
+  private stopping = false;
+  private retry: NodeJS.Timeout | null = null;
 
   constructor(@Inject(APP_CONFIG) private readonly config: AppConfig) {
     this.boss = new PgBoss({
@@ -37,30 +42,65 @@ export class AlertQueue implements OnApplicationBootstrap, OnApplicationShutdown
   }
 
   /** The worker registers here before the application starts. */
-  onWork(handler: Handler): void {
+  onWork(handler: Handler, afterStart: () => Promise<void>): void {
     this.handler = handler;
+    this.afterStart = afterStart;
   }
 
+  /**
+   * Starts the queue with the API. A database that is down must not keep the API from starting
+   * (the health route reports it), so a failed start is logged and tried again a little later.
+   */
   async onApplicationBootstrap(): Promise<void> {
-    this.started = (async () => {
-      await this.boss.start();
-      await this.boss.createQueue(ALERT_DUE_QUEUE);
-      const handler = this.handler;
-      if (handler) {
-        const pollingIntervalSeconds = Math.max(0.5, this.config.alertPollingSeconds ?? DEFAULT_POLLING_SECONDS);
-        await this.boss.work<AlertDueJob>(ALERT_DUE_QUEUE, { pollingIntervalSeconds, batchSize: 5 }, async (jobs) => {
-          for (const job of jobs) await handler(job.data);
-        });
-      }
-    })();
-    await this.started;
+    this.started = this.start();
+    await this.started.then(
+      () => this.recover(),
+      (error: unknown) => this.retryLater(error),
+    );
+  }
+
+  /** Jobs for deliveries planned while the queue was down (or lost with its schema). */
+  private async recover(): Promise<void> {
+    await this.afterStart?.().catch((error: unknown) =>
+      this.logger.error(`Alert recovery failed: ${error instanceof Error ? error.message : String(error)}`),
+    );
+  }
+
+  private async start(): Promise<void> {
+    await this.boss.start();
+    await this.boss.createQueue(ALERT_DUE_QUEUE);
+    const handler = this.handler;
+    if (handler) {
+      const pollingIntervalSeconds = Math.max(0.5, this.config.alertPollingSeconds ?? DEFAULT_POLLING_SECONDS);
+      await this.boss.work<AlertDueJob>(ALERT_DUE_QUEUE, { pollingIntervalSeconds, batchSize: 5 }, async (jobs) => {
+        for (const job of jobs) await handler(job.data);
+      });
+    }
+  }
+
+  private retryLater(error: unknown): void {
+    this.logger.error(`Alert queue did not start: ${error instanceof Error ? error.message : String(error)}`);
+    if (this.stopping) return;
+    this.retry = setTimeout(() => {
+      this.started = this.start();
+      this.started.then(
+        () => this.recover(),
+        (e: unknown) => this.retryLater(e),
+      );
+    }, START_RETRY_MS);
+    this.retry.unref();
   }
 
   async onApplicationShutdown(): Promise<void> {
+    this.stopping = true;
+    if (this.retry) clearTimeout(this.retry);
     if (!this.started) return;
-    await this.started.catch(() => undefined);
+    const running = await this.started.then(
+      () => true,
+      () => false,
+    );
     // Graceful: the worker finishes the job in hand (its claim is recorded) before the pool closes.
-    await this.boss.stop({ graceful: true, wait: true, timeout: 10_000 });
+    if (running) await this.boss.stop({ graceful: true, wait: true, timeout: 10_000 });
   }
 
   /** A job at `at` for one delivery; the key includes the time so a moved delivery gets a fresh job. */

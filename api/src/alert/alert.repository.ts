@@ -227,6 +227,18 @@ export class AlertRepository {
       .execute();
   }
 
+  /** Deliveries not sent, not dropped, of alerts not cancelled. */
+  openDeliveries(): Promise<{ id: string; slotKey: string; sendAfter: Date }[]> {
+    return this.db
+      .selectFrom('alertDelivery as d')
+      .innerJoin('alert as a', 'a.id', 'd.alertId')
+      .select(['d.id', 'a.slotKey', 'd.sendAfter'])
+      .where('d.sentAt', 'is', null)
+      .where('d.droppedAt', 'is', null)
+      .where('a.status', '<>', 'cancelled')
+      .execute();
+  }
+
   recipient(accountId: string): Promise<AlertRecipient | undefined> {
     return this.db
       .selectFrom('account')

@@ -28,7 +28,18 @@ export class AlertWorker implements OnModuleInit {
   ) {}
 
   onModuleInit(): void {
-    this.queue.onWork((job) => this.deliver(job));
+    this.queue.onWork(
+      (job) => this.deliver(job),
+      () => this.scheduleOpen(),
+    );
+  }
+
+  /**
+   * On start: a job for every delivery still open. One may exist already; the claim makes the
+   * spare a no-op. This is what makes the promise survive a queue that was down or wiped.
+   */
+  async scheduleOpen(): Promise<void> {
+    for (const d of await this.alerts.openDeliveries()) await this.queue.schedule(d.id, d.slotKey, d.sendAfter);
   }
 
   /** Claim, then send; a delivery someone else holds, already sent, or not yet due is left alone. */
