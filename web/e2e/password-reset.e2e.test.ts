@@ -44,6 +44,8 @@ describe('forgot password', () => {
     await page.context().clearCookies();
 
     await page.goto(`${base}/sign-in`);
+    await page.getByRole('link', { name: 'Forgot password?' }).waitFor();
+    await page.screenshot({ path: join(RESULTS_DIR, 'sign-in-forgot-link.png') });
     await page.getByRole('link', { name: 'Forgot password?' }).click();
     await page.waitForURL(`${base}/forgot-password`);
     await page.getByLabel('E-mail').fill(email);
@@ -64,6 +66,7 @@ describe('forgot password', () => {
     await page.getByLabel('New password', { exact: true }).fill('short');
     await page.getByRole('button', { name: 'Set new password' }).click();
     await page.getByText('Use at least 8 characters.').waitFor();
+    await page.screenshot({ path: join(RESULTS_DIR, 'reset-password.png') });
     await page.getByLabel('New password', { exact: true }).fill(NEW_PASSWORD);
     await page.getByRole('button', { name: 'Set new password' }).click();
     await page.getByRole('status').filter({ hasText: 'Your password is changed' }).waitFor();

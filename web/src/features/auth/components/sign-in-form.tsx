@@ -46,7 +46,7 @@ export function SignInForm() {
         autoComplete="current-password"
         rules={{ required: 'Enter your password.' }}
       />
-      <Link component={RouterLink} to="/forgot-password" variant="body2" sx={{ alignSelf: 'flex-end' }}>
+      <Link component={RouterLink} to="/forgot-password" variant="body2" sx={{ alignSelf: 'flex-end', py: 1 }}>
         Forgot password?
       </Link>
       <FormAlert message={formState.errors.root?.server?.message} />
