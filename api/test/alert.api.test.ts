@@ -168,12 +168,47 @@ describe('scheduling and in-app delivery', () => {
     expect(after[0]!.dueAt.getTime()).not.toBe(before!.dueAt.getTime());
   });
 
-  it('quiet hours hold the e-mail but not the in-app alert', async () => {
+  it('quiet hours hold the e-mail but not the in-app alert, and drop it when it would be stale', async () => {
     const now = new Date();
     const hhmm = (d: Date) => d.toISOString().slice(11, 16);
-    const quiet = { from: hhmm(new Date(now.getTime() - HOUR)), until: hhmm(new Date(now.getTime() + 2 * HOUR)) };
-    await setPrefs({ leadMinutes: 240, quietHours: quiet });
-    await fedCulture(2);
+    const end = new Date(now.getTime() + 0.5 * HOUR);
+    await setPrefs({ leadMinutes: 240, quietHours: { from: hhmm(new Date(now.getTime() - HOUR)), until: hhmm(end) } });
+    const { culture } = await fedCulture(2);
+    // Precondition: the ready window (the alert's staleness) lasts past the quiet hours' end.
+    const s = await ok<CultureSummary>(call('GET', `/api/cultures/${culture.id}/summary`));
+    expect(Date.parse(s.forecast!.high)).toBeGreaterThan(end.getTime() + 60_000);
+    expect(await waitForAlerts(1)).toHaveLength(1);
+    const [alert] = await alertRows('culture-ready');
+    const email = () =>
+      t.db
+        .selectFrom('alertDelivery')
+        .selectAll()
+        .where('alertId', '=', alert!.id)
+        .where('channel', '=', 'email')
+        .executeTakeFirstOrThrow();
+    const held = await email();
+    expect(held.sentAt).toBeNull();
+    expect(held.droppedAt).toBeNull();
+    // Held to the end of the quiet hours (within the minute: the clock times are whole minutes).
+    expect(Math.abs(held.sendAfter.getTime() - end.getTime())).toBeLessThan(60_000);
+    expect(mailbox.messages()).toHaveLength(0);
+  });
+
+  it('an e-mail that quiet hours would hold past the ready window is dropped; the app still shows it', async () => {
+    const now = new Date();
+    const hhmm = (d: Date) => d.toISOString().slice(11, 16);
+    await setPrefs({ leadMinutes: 0 });
+    const { culture } = await fedCulture(2);
+    const s = await ok<CultureSummary>(call('GET', `/api/cultures/${culture.id}/summary`));
+    // Quiet from an hour ago until an hour after the ready window closes (the alert's staleness).
+    const until = new Date(Date.parse(s.forecast!.high) + HOUR);
+    expect(until.getTime() - now.getTime()).toBeLessThan(23 * HOUR);
+    await setPrefs({
+      leadMinutes: 240,
+      quietHours: { from: hhmm(new Date(now.getTime() - HOUR)), until: hhmm(until) },
+    });
+    // Any logbook write re-plans: the longer lead moves the alert to now, with the new quiet hours.
+    await ok(call('PATCH', `/api/cultures/${culture.id}`, { notes: 'Warm kitchen' }));
     expect(await waitForAlerts(1)).toHaveLength(1);
     const [alert] = await alertRows('culture-ready');
     const email = await t.db
@@ -182,10 +217,8 @@ describe('scheduling and in-app delivery', () => {
       .where('alertId', '=', alert!.id)
       .where('channel', '=', 'email')
       .executeTakeFirstOrThrow();
+    expect(email.droppedAt).not.toBeNull();
     expect(email.sentAt).toBeNull();
-    // Held to the end of the quiet hours (within the minute: the clock times are whole minutes).
-    expect(Math.abs(email.sendAfter.getTime() - (now.getTime() + 2 * HOUR))).toBeLessThan(60_000);
-    expect(mailbox.messages()).toHaveLength(0);
   });
 
   it('deleting the feeding removes its pending alerts', async () => {

@@ -2,6 +2,7 @@ import { Global, Module } from '@nestjs/common';
 import { BakePlanRepository } from '../bake-plan/bake-plan.repository.js';
 import { CultureSummaryRepository } from '../culture/culture-summary.repository.js';
 import { CultureRepository } from '../culture/culture.repository.js';
+import { AlertListRepository } from './alert-list.repository.js';
 import { AlertClock } from './alert.clock.js';
 import { AlertController } from './alert.controller.js';
 import { AlertQueue } from './alert.queue.js';
@@ -21,6 +22,7 @@ import { AlertWorker } from './alert.worker.js';
     AlertClock,
     AlertQueue,
     AlertRepository,
+    AlertListRepository,
     AlertScheduler,
     AlertService,
     AlertWorker,

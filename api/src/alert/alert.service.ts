@@ -8,6 +8,7 @@ import {
   type UpdateAlertPreferencesRequest,
 } from '@peakwise/shared';
 import type { AccountRecord } from '../account/account.repository.js';
+import { AlertListRepository } from './alert-list.repository.js';
 import { AlertRepository, type AlertRow } from './alert.repository.js';
 
 function toAlert(row: AlertRow): Alert {
@@ -28,26 +29,29 @@ function toAlert(row: AlertRow): Alert {
 /** The Alerts page and the alert settings; every query is scoped to the signed-in account. */
 @Injectable()
 export class AlertService {
-  constructor(private readonly alerts: AlertRepository) {}
+  constructor(
+    private readonly alerts: AlertRepository,
+    private readonly page: AlertListRepository,
+  ) {}
 
   async list(account: AccountRecord, page: { limit: number; offset: number }): Promise<AlertListResponse> {
-    const { items, total } = await this.alerts.list(account.id, page);
+    const { items, total } = await this.page.list(account.id, page);
     return { items: items.map(toAlert), total, limit: page.limit, offset: page.offset };
   }
 
   async unreadCount(account: AccountRecord): Promise<{ unread: number }> {
-    return { unread: await this.alerts.unreadCount(account.id) };
+    return { unread: await this.page.unreadCount(account.id) };
   }
 
   /** Another account's alert (or one not shown yet) is a 404, like one that does not exist. */
   async markRead(account: AccountRecord, id: string): Promise<Alert> {
-    const row = await this.alerts.markRead(account.id, id);
+    const row = await this.page.markRead(account.id, id);
     if (!row) throw new NotFoundException('No alert with this id.');
     return toAlert(row);
   }
 
   async markAllRead(account: AccountRecord): Promise<{ marked: number }> {
-    return { marked: await this.alerts.markAllRead(account.id) };
+    return { marked: await this.page.markAllRead(account.id) };
   }
 
   async preferences(account: AccountRecord): Promise<AlertPreferences> {
