@@ -1,8 +1,8 @@
 import { join } from 'node:path';
 import { request, type Page } from 'playwright-core';
-import { afterEach, beforeEach, describe, expect, it } from 'vitest';
-import { baseUrl, DESKTOP, launchBrowser, PHONE, RESULTS_DIR, uniqueEmail, type Browser } from './browser';
-import { PASSWORD, signUp } from './helpers';
+import { describe, expect, it } from 'vitest';
+import { baseUrl, DESKTOP, PHONE, RESULTS_DIR, uniqueEmail } from './browser';
+import { browserPerTest, PASSWORD, signUp } from './helpers';
 
 /** The page heading greets the baker by name ("Good morning, Theo Park"); returns its text. */
 async function greetingFor(page: Page, name: string): Promise<string> {
@@ -13,19 +13,8 @@ async function greetingFor(page: Page, name: string): Promise<string> {
 }
 
 describe('signing up, out and in', () => {
-  let base: string;
-  let browser: Browser;
-
-  // A fresh browser (and so a fresh cookie jar) per test: clearing cookies in a shared one races
-  // with a late response of the previous test setting the rolling session cookie again.
-  beforeEach(async () => {
-    base = baseUrl();
-    browser = await launchBrowser(PHONE);
-  });
-
-  afterEach(async () => {
-    await browser?.close();
-  });
+  const base = baseUrl();
+  const browser = browserPerTest();
 
   it('works end to end at phone size, with the bottom navigation', async () => {
     const page = await browser.context.newPage();

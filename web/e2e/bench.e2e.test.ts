@@ -1,9 +1,9 @@
 import { readFile } from 'node:fs/promises';
 import { join } from 'node:path';
 import type { Locator, Page } from 'playwright-core';
-import { afterEach, beforeEach, describe, expect, it } from 'vitest';
-import { baseUrl, DESKTOP, launchBrowser, PHONE, RESULTS_DIR, type Browser } from './browser';
-import { createCulture, createFeeding, HOUR, patchAccount, post, signUp } from './helpers';
+import { beforeEach, describe, expect, it } from 'vitest';
+import { baseUrl, DESKTOP, PHONE, RESULTS_DIR } from './browser';
+import { browserPerTest, createCulture, createFeeding, HOUR, patchAccount, post, signUp } from './helpers';
 
 const ZONE = 'Europe/Berlin';
 
@@ -51,16 +51,11 @@ function tomorrowIn(zone: string): string {
 
 describe('Bench on a phone', () => {
   const base = baseUrl();
-  let browser: Browser;
+  const browser = browserPerTest();
   let page: Page;
 
   beforeEach(async () => {
-    browser = await launchBrowser(PHONE);
     page = await browser.context.newPage();
-  });
-
-  afterEach(async () => {
-    await browser.close();
   });
 
   it('plans ready-at tomorrow 09:00 around quiet hours, follows the overnight retard, checks off, logs, exports', async () => {

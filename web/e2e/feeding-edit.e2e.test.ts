@@ -1,8 +1,8 @@
 import { join } from 'node:path';
 import type { Page } from 'playwright-core';
-import { afterEach, beforeEach, describe, expect, it } from 'vitest';
-import { baseUrl, DESKTOP, launchBrowser, PHONE, RESULTS_DIR, type Browser } from './browser';
-import { addRiseChecks, HOUR, localInput, patchAccount, signUp } from './helpers';
+import { describe, expect, it } from 'vitest';
+import { baseUrl, DESKTOP, PHONE, RESULTS_DIR } from './browser';
+import { addRiseChecks, browserPerTest, HOUR, localInput, patchAccount, signUp } from './helpers';
 
 interface FeedingJson {
   id: string;
@@ -56,17 +56,8 @@ async function getJson<T>(page: Page, url: string): Promise<T> {
 }
 
 describe('correcting one feeding on a phone', () => {
-  let base: string;
-  let browser: Browser;
-
-  beforeEach(async () => {
-    base = baseUrl();
-    browser = await launchBrowser(PHONE);
-  });
-
-  afterEach(async () => {
-    await browser?.close();
-  });
+  const base = baseUrl();
+  const browser = browserPerTest();
 
   it('edits the feeding in °F, adds temperatures, corrects and removes rise checks, deletes the feeding', async () => {
     const page = await browser.context.newPage();

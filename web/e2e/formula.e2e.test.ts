@@ -1,9 +1,9 @@
 import { join } from 'node:path';
 import type { FormulaComputed } from '@peakwise/shared';
 import type { Page } from 'playwright-core';
-import { afterEach, beforeEach, describe, expect, it } from 'vitest';
-import { baseUrl, DESKTOP, launchBrowser, PHONE, RESULTS_DIR, type Browser } from './browser';
-import { signUp } from './helpers';
+import { beforeEach, describe, expect, it } from 'vitest';
+import { baseUrl, DESKTOP, RESULTS_DIR } from './browser';
+import { browserPerTest, signUp } from './helpers';
 
 /** Fills line `n` (1-based) of the editor. */
 async function line(page: Page, n: number, amount: string, unit: string, food?: string) {
@@ -33,16 +33,11 @@ const TYPED = {
 
 describe('Formula on a phone', () => {
   const base = baseUrl();
-  let browser: Browser;
+  const browser = browserPerTest();
   let page: Page;
 
   beforeEach(async () => {
-    browser = await launchBrowser(PHONE);
     page = await browser.context.newPage();
-  });
-
-  afterEach(async () => {
-    await browser.close();
   });
 
   it('weighs a volume recipe, switches views, scales to pieces, picks the water, saves and reopens', async () => {

@@ -1,9 +1,32 @@
-import type { Page } from 'playwright-core';
-import { expect } from 'vitest';
-import { uniqueEmail } from './browser';
+import type { BrowserContext, Page } from 'playwright-core';
+import { afterEach, beforeEach, expect } from 'vitest';
+import { launchBrowser, PHONE, uniqueEmail, type Browser } from './browser';
 
 export const PASSWORD = 'rye starter bubbles at dawn';
 export const HOUR = 3_600_000;
+
+/**
+ * A fresh browser (and so a fresh cookie jar) for each test of the enclosing describe, closed
+ * after it: clearing cookies in a shared one races with a late response of the previous test
+ * setting the rolling session cookie again. Read `.context` inside a test.
+ */
+export function browserPerTest(viewport: { width: number; height: number } = PHONE): {
+  readonly context: BrowserContext;
+} {
+  let browser: Browser | undefined;
+  beforeEach(async () => {
+    browser = await launchBrowser(viewport);
+  });
+  afterEach(async () => {
+    await browser?.close();
+  });
+  return {
+    get context() {
+      if (!browser) throw new Error('browserPerTest: the browser opens before each test');
+      return browser.context;
+    },
+  };
+}
 
 /**
  * Creates a fresh account through the sign-up form and waits for Home, so each test starts signed

@@ -1,9 +1,10 @@
 import { join } from 'node:path';
 import { request, type Page } from 'playwright-core';
-import { afterEach, beforeEach, describe, expect, it } from 'vitest';
-import { baseUrl, DESKTOP, launchBrowser, PHONE, RESULTS_DIR, uniqueEmail, type Browser } from './browser';
+import { describe, expect, it } from 'vitest';
+import { baseUrl, DESKTOP, RESULTS_DIR, uniqueEmail } from './browser';
 import {
   addRiseChecks,
+  browserPerTest,
   createCulture,
   createFeeding,
   HOUR,
@@ -121,17 +122,8 @@ async function logPastFeeding(page: Page, base: string, cultureId: string, hours
 }
 
 describe('the culture logbook on a phone', () => {
-  let base: string;
-  let browser: Browser;
-
-  beforeEach(async () => {
-    base = baseUrl();
-    browser = await launchBrowser(PHONE);
-  });
-
-  afterEach(async () => {
-    await browser?.close();
-  });
+  const base = baseUrl();
+  const browser = browserPerTest();
 
   it('creates a culture, logs a 1:2:2 feeding and five rise checks, and opens the culture page', async () => {
     const page = await browser.context.newPage();

@@ -2,9 +2,9 @@ import { readFile } from 'node:fs/promises';
 import { join } from 'node:path';
 import { CSV_COLUMNS, REQUEST_BODY_MAX_BYTES } from '@peakwise/shared';
 import type { Download, Locator, Page } from 'playwright-core';
-import { afterEach, beforeEach, describe, expect, it } from 'vitest';
-import { baseUrl, DESKTOP, launchBrowser, PHONE, RESULTS_DIR, type Browser } from './browser';
-import { createCulture, createFeeding, HOUR, post, signUp } from './helpers';
+import { describe, expect, it } from 'vitest';
+import { baseUrl, DESKTOP, PHONE, RESULTS_DIR } from './browser';
+import { browserPerTest, createCulture, createFeeding, HOUR, post, signUp } from './helpers';
 
 async function feedingCount(page: Page, base: string, cultureId: string): Promise<number> {
   const res = await page.request.get(`${base}/api/cultures/${cultureId}/feedings?limit=1`);
@@ -54,17 +54,8 @@ async function mapColumns(page: Page) {
 }
 
 describe('import and export on a phone', () => {
-  let base: string;
-  let browser: Browser;
-
-  beforeEach(async () => {
-    base = baseUrl();
-    browser = await launchBrowser(PHONE);
-  });
-
-  afterEach(async () => {
-    await browser?.close();
-  });
+  const base = baseUrl();
+  const browser = browserPerTest();
 
   it('downloads the CSV, imports a spreadsheet with its own headers after fixing a row, and skips it the second time', async () => {
     const page = await browser.context.newPage();
