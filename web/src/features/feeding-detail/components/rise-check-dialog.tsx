@@ -4,12 +4,12 @@ import Dialog from '@mui/material/Dialog';
 import DialogActions from '@mui/material/DialogActions';
 import DialogContent from '@mui/material/DialogContent';
 import DialogTitle from '@mui/material/DialogTitle';
-import InputAdornment from '@mui/material/InputAdornment';
 import Stack from '@mui/material/Stack';
 import { useState } from 'react';
 import { useForm } from 'react-hook-form';
 import { FormAlert } from '@/components/form/form-alert';
 import { FormTextField } from '@/components/form/form-text-field';
+import { unitSlotProps } from '@/components/form/unit-slot-props';
 import { formatHeight, heightUnit } from '@/lib/format/units';
 import { applyMappedServerErrors } from '@/lib/form-errors';
 import { useUpdateRiseCheck } from '../api/update-rise-check';
@@ -21,8 +21,6 @@ const FIELD_OF: Record<string, keyof RiseCheckEditValues> = {
   temperatureC: 'temperature',
   takenAt: 'takenAt',
 };
-
-const adornment = (u: string) => ({ endAdornment: <InputAdornment position="end">{u}</InputAdornment> });
 
 interface RiseCheckDialogProps {
   check: RiseCheck;
@@ -68,13 +66,13 @@ export function RiseCheckDialog({ check, feeding, account, onClose }: RiseCheckD
                   ? undefined
                   : `It started at ${formatHeight(feeding.initialHeightMm, account.unitSystem)}.`
               }
-              slotProps={{ input: adornment(heightUnit(account.unitSystem)), htmlInput: { inputMode: 'decimal' } }}
+              slotProps={unitSlotProps(heightUnit(account.unitSystem))}
             />
             <FormTextField
               control={control}
               name="temperature"
               label="Temperature then (optional)"
-              slotProps={{ input: adornment(`°${account.temperatureUnit}`), htmlInput: { inputMode: 'decimal' } }}
+              slotProps={unitSlotProps(`°${account.temperatureUnit}`)}
             />
             <FormTextField
               control={control}

@@ -1,12 +1,12 @@
 import type { Account } from '@peakwise/shared';
 import Button from '@mui/material/Button';
-import InputAdornment from '@mui/material/InputAdornment';
 import Stack from '@mui/material/Stack';
 import Typography from '@mui/material/Typography';
 import { useState } from 'react';
 import { useForm } from 'react-hook-form';
 import { FormAlert } from '@/components/form/form-alert';
 import { FormTextField } from '@/components/form/form-text-field';
+import { unitSlotProps } from '@/components/form/unit-slot-props';
 import { toLocalInput } from '@/lib/format/local-input';
 import { applyMappedServerErrors } from '@/lib/form-errors';
 import { useIdempotencyKey } from '@/lib/idempotency';
@@ -57,10 +57,7 @@ export function TemperatureEntryForm({ feedingId, account }: { feedingId: string
           name="temperature"
           label="Temperature"
           sx={{ flex: 1 }}
-          slotProps={{
-            input: { endAdornment: <InputAdornment position="end">°{account.temperatureUnit}</InputAdornment> },
-            htmlInput: { inputMode: 'decimal' },
-          }}
+          slotProps={unitSlotProps(`°${account.temperatureUnit}`)}
         />
         <FormTextField
           control={control}
