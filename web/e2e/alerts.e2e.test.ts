@@ -66,7 +66,7 @@ describe('alerts at phone size', () => {
 
     await card.getByRole('button', { name: 'Mark read' }).click();
     await page.getByRole('link', { name: 'Alerts, none unread' }).waitFor();
-    expect(await card.getByText('New').count()).toBe(0);
+    await expect.poll(() => card.getByText('New').count()).toBe(0);
     await card.getByRole('link', { name: 'Open culture' }).click();
     await page.waitForURL(`${base}/cultures/${cultureId}`);
 
