@@ -10,6 +10,7 @@ import { AccountService } from '../account/account.service.js';
 import { PasswordService } from '../auth/password.service.js';
 import type { AppConfig } from '../config.js';
 import { openDatabase } from '../db/database.js';
+import { scheduleDemoAlerts } from './demo-alerts.js';
 import { seedDemoFormulas } from './demo-formulas.js';
 import { seedDemoLogbook } from './demo-logbook.js';
 
@@ -44,8 +45,11 @@ try {
       accountIds.set(person.email, account.id);
       made.push({ ...person, password });
     }
-    const feedings = await seedDemoLogbook(db, accountIds, new Date());
+    const now = new Date();
+    const { feedings, cultureIds } = await seedDemoLogbook(db, accountIds, now);
     process.stdout.write(`seeded ${feedings} demo feedings with their rise checks\n`);
+    const alerts = await scheduleDemoAlerts(db, [...cultureIds.values()], now);
+    process.stdout.write(`scheduled ${alerts} demo alerts (the API queues them when it starts)\n`);
     process.stdout.write(`seeded ${await seedDemoFormulas(db, accountIds)} demo formulas\n`);
     const dataDir = process.env.PEAKWISE_DATA_DIR;
     if (dataDir) {
