@@ -67,11 +67,23 @@ export async function createTestApp(
   return { app, db: database.db, config, close: () => app.close() };
 }
 
-/** Empties every table the app writes, between tests. */
+/**
+ * Empties every table the app writes, between tests. Work the app does after answering (alert
+ * refreshes, the queue's worker, mail sent after a 202) may still hold row locks, so TRUNCATE can
+ * be picked as a deadlock victim (40P01); PostgreSQL has then rolled it back, and it is retried.
+ */
 export async function resetDatabase(db: Database): Promise<void> {
-  await sql`TRUNCATE account, session, culture, feeding, rise_check, temperature_reading, idempotency_key,
-    formula, formula_ingredient, formula_blend_flour, bake_plan, bake_plan_step, dough_reading,
-    alert, alert_delivery, alert_preference, account_token`.execute(db);
+  for (let attempt = 1; ; attempt++) {
+    try {
+      await sql`TRUNCATE account, session, culture, feeding, rise_check, temperature_reading, idempotency_key,
+        formula, formula_ingredient, formula_blend_flour, bake_plan, bake_plan_step, dough_reading,
+        alert, alert_delivery, alert_preference, account_token`.execute(db);
+      return;
+    } catch (error) {
+      if ((error as { code?: string }).code !== '40P01' || attempt >= 5) throw error;
+      await new Promise((resolve) => setTimeout(resolve, 50 * attempt));
+    }
+  }
 }
 
 /** Every Set-Cookie header of a response that sets (not clears) the session cookie. */
