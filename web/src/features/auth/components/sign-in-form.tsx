@@ -5,10 +5,9 @@ import Stack from '@mui/material/Stack';
 import { useForm } from 'react-hook-form';
 import { Link as RouterLink } from 'react-router-dom';
 import { FormAlert } from '@/components/form/form-alert';
-import { FormTextField } from '@/components/form/form-text-field';
+import { EmailField } from '@/components/form/email-field';
 import { PasswordField } from '@/components/form/password-field';
 import { applyServerErrors } from '@/lib/form-errors';
-import { emailRules } from '@/lib/validation';
 import { useSignIn } from '../api/sign-in';
 
 const FIELDS = ['email', 'password'] as const;
@@ -30,15 +29,7 @@ export function SignInForm() {
 
   return (
     <Stack component="form" noValidate onSubmit={(e) => void onSubmit(e)} spacing={2.5}>
-      <FormTextField
-        control={control}
-        name="email"
-        label="E-mail"
-        type="email"
-        autoComplete="email"
-        rules={emailRules}
-        slotProps={{ htmlInput: { inputMode: 'email', autoCapitalize: 'none', spellCheck: false } }}
-      />
+      <EmailField control={control} name="email" />
       <PasswordField
         control={control}
         name="password"

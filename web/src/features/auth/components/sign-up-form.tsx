@@ -3,10 +3,11 @@ import Button from '@mui/material/Button';
 import Stack from '@mui/material/Stack';
 import { useForm } from 'react-hook-form';
 import { FormAlert } from '@/components/form/form-alert';
+import { EmailField } from '@/components/form/email-field';
 import { FormTextField } from '@/components/form/form-text-field';
 import { PasswordField } from '@/components/form/password-field';
 import { applyServerErrors } from '@/lib/form-errors';
-import { displayNameRules, emailRules, newPasswordHint, newPasswordRules } from '@/lib/validation';
+import { displayNameRules, newPasswordHint, newPasswordRules } from '@/lib/validation';
 import { useSignUp } from '../api/sign-up';
 
 const FIELDS = ['displayName', 'email', 'password'] as const;
@@ -42,15 +43,7 @@ export function SignUpForm() {
         helperText="Shown to you, and to your instructor if you join a class."
         rules={displayNameRules}
       />
-      <FormTextField
-        control={control}
-        name="email"
-        label="E-mail"
-        type="email"
-        autoComplete="email"
-        rules={emailRules}
-        slotProps={{ htmlInput: { inputMode: 'email', autoCapitalize: 'none', spellCheck: false } }}
-      />
+      <EmailField control={control} name="email" />
       <PasswordField
         control={control}
         name="password"

@@ -4,9 +4,8 @@ import Button from '@mui/material/Button';
 import Stack from '@mui/material/Stack';
 import { useForm } from 'react-hook-form';
 import { FormAlert } from '@/components/form/form-alert';
-import { FormTextField } from '@/components/form/form-text-field';
+import { EmailField } from '@/components/form/email-field';
 import { applyServerErrors } from '@/lib/form-errors';
-import { emailRules } from '@/lib/validation';
 import { useRequestPasswordReset } from '../api/request-password-reset';
 
 const FIELDS = ['email'] as const;
@@ -48,15 +47,7 @@ export function ForgotPasswordForm() {
 
   return (
     <Stack component="form" noValidate onSubmit={(e) => void onSubmit(e)} spacing={2.5}>
-      <FormTextField
-        control={control}
-        name="email"
-        label="E-mail"
-        type="email"
-        autoComplete="email"
-        rules={emailRules}
-        slotProps={{ htmlInput: { inputMode: 'email', autoCapitalize: 'none', spellCheck: false } }}
-      />
+      <EmailField control={control} name="email" />
       <FormAlert message={formState.errors.root?.server?.message} />
       <Button type="submit" variant="contained" size="large" loading={formState.isSubmitting}>
         Send me a link
