@@ -20,8 +20,8 @@ import { historyOf } from './alert.history.js';
 import { AlertQueue } from './alert.queue.js';
 import { AlertRepository, type DeliveryPlan } from './alert.repository.js';
 
-/** Channels this build can send; `push` is in the shapes and preferences but not delivered yet. */
-export const DELIVERED_CHANNELS: readonly AlertChannel[] = ['in-app', 'email'];
+/** Channels this build delivers (push goes to every device the baker turned it on for). */
+export const DELIVERED_CHANNELS: readonly AlertChannel[] = ['in-app', 'email', 'push'];
 
 /**
  * Keeps the stored alerts equal to what the rules want: new ones are inserted, moved ones keep
