@@ -50,6 +50,7 @@ export interface Alert {
   accountId: string;
   body: string;
   cancelledAt: Timestamp | null;
+  commentId: string | null;
   createdAt: Generated<Timestamp>;
   cultureId: string | null;
   dueAt: Timestamp;
@@ -93,6 +94,12 @@ export interface AlertPreference {
   updatedAt: Generated<Timestamp>;
 }
 
+export interface AppSecret {
+  createdAt: Generated<Timestamp>;
+  name: string;
+  value: Json;
+}
+
 export interface BakePlan {
   accountId: string;
   cancelledAt: Timestamp | null;
@@ -122,6 +129,46 @@ export interface BakePlanStep {
   startedAt: Timestamp;
   stepId: string;
   updatedAt: Generated<Timestamp>;
+}
+
+export interface BakingClass {
+  createdAt: Generated<Timestamp>;
+  description: Generated<string>;
+  endsOn: Timestamp;
+  id: Generated<string>;
+  instructorId: string;
+  joinCode: string | null;
+  name: string;
+  startsOn: Timestamp;
+  updatedAt: Generated<Timestamp>;
+}
+
+export interface ClassInvite {
+  classId: string;
+  createdAt: Generated<Timestamp>;
+  email: string;
+  expiresAt: Timestamp;
+  id: Generated<string>;
+  revokedAt: Timestamp | null;
+  tokenHash: string;
+  usedAt: Timestamp | null;
+  usedBy: string | null;
+}
+
+export interface ClassMember {
+  accountId: string;
+  classId: string;
+  joinedAt: Generated<Timestamp>;
+  leftAt: Timestamp | null;
+}
+
+export interface Comment {
+  authorId: string;
+  body: string;
+  createdAt: Generated<Timestamp>;
+  feedingId: string | null;
+  id: Generated<string>;
+  planId: string | null;
 }
 
 export interface Culture {
@@ -211,6 +258,18 @@ export interface IdempotencyKey {
   statusCode: number | null;
 }
 
+export interface PushSubscription {
+  accountId: string;
+  auth: string;
+  createdAt: Generated<Timestamp>;
+  endpoint: string;
+  id: Generated<string>;
+  label: string;
+  lastError: string | null;
+  lastSentAt: Timestamp | null;
+  p256dh: string;
+}
+
 export interface RiseCheck {
   createdAt: Generated<Timestamp>;
   feedingId: string;
@@ -247,8 +306,13 @@ export interface DB {
   alert: Alert;
   alertDelivery: AlertDelivery;
   alertPreference: AlertPreference;
+  appSecret: AppSecret;
   bakePlan: BakePlan;
   bakePlanStep: BakePlanStep;
+  bakingClass: BakingClass;
+  classInvite: ClassInvite;
+  classMember: ClassMember;
+  comment: Comment;
   culture: Culture;
   doughReading: DoughReading;
   feeding: Feeding;
@@ -256,6 +320,7 @@ export interface DB {
   formulaBlendFlour: FormulaBlendFlour;
   formulaIngredient: FormulaIngredient;
   idempotencyKey: IdempotencyKey;
+  pushSubscription: PushSubscription;
   riseCheck: RiseCheck;
   schemaMigration: SchemaMigration;
   session: Session;

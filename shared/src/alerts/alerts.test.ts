@@ -180,9 +180,17 @@ describe('preferences', () => {
       channels: { 'past-peak': { email: false } },
     });
     expect(p.leadMinutes).toBe(30);
-    expect(channelsFor(p, 'past-peak')).toEqual(['in-app']);
-    expect(channelsFor(p, 'culture-ready')).toEqual(['in-app', 'email']);
+    expect(channelsFor(p, 'past-peak')).toEqual(['in-app', 'push']);
+    expect(channelsFor(p, 'culture-ready')).toEqual(['in-app', 'email', 'push']);
     const kept = mergeAlertPreferences(p, { channels: { 'past-peak': { email: true, push: undefined } } });
-    expect(kept.channels['past-peak']).toEqual({ email: true, push: false });
+    expect(kept.channels['past-peak']).toEqual({ email: true, push: true });
+  });
+
+  it('a kind the stored choices predate takes the default channels', () => {
+    const stored = defaultAlertPreferences();
+    const { comment: _dropped, ...older } = stored.channels;
+    const prefs = { ...stored, channels: older as typeof stored.channels };
+    expect(channelsFor(prefs, 'comment')).toEqual(['in-app', 'email', 'push']);
+    expect(mergeAlertPreferences(prefs, { leadMinutes: 5 }).channels.comment).toEqual({ email: true, push: true });
   });
 });

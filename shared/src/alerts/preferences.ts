@@ -7,10 +7,13 @@ import {
   type UpdateAlertPreferencesRequest,
 } from '../contracts/alert.js';
 
-/** Until the baker says otherwise: every kind in the app and by e-mail, no quiet hours; push is not built yet. */
+/**
+ * Until the baker says otherwise: every kind in the app, by e-mail and by push, no quiet hours.
+ * Push reaches only devices the baker turned notifications on for, so "on" costs nothing without one.
+ */
 export function defaultAlertPreferences(): AlertPreferences {
   const channels = Object.fromEntries(
-    ALERT_KINDS.map((k) => [k, { email: true, push: false }]),
+    ALERT_KINDS.map((k) => [k, { email: true, push: true }]),
   ) as AlertPreferences['channels'];
   return { leadMinutes: ALERT_LEAD_MINUTES_DEFAULT, quietHours: null, channels };
 }
@@ -20,7 +23,7 @@ export function mergeAlertPreferences(
   current: AlertPreferences,
   patch: UpdateAlertPreferencesRequest,
 ): AlertPreferences {
-  const channels = { ...current.channels };
+  const channels = { ...withEveryKind(current.channels) };
   for (const kind of ALERT_KINDS) {
     const change = patch.channels?.[kind];
     // A request object may carry a field as `undefined` (class instances do): that keeps the value.
@@ -40,6 +43,11 @@ export function mergeAlertPreferences(
 
 /** The channels an alert of `kind` goes to: the app always, then what the baker switched on. */
 export function channelsFor(prefs: AlertPreferences, kind: AlertKind): AlertChannel[] {
-  const choice = prefs.channels[kind];
+  const choice = prefs.channels[kind] ?? defaultAlertPreferences().channels[kind];
   return ['in-app', ...(choice.email ? (['email'] as const) : []), ...(choice.push ? (['push'] as const) : [])];
+}
+
+/** Stored choices may predate a kind (e.g. `comment`); a kind they lack takes the default. */
+export function withEveryKind(channels: Partial<AlertPreferences['channels']>): AlertPreferences['channels'] {
+  return { ...defaultAlertPreferences().channels, ...channels };
 }

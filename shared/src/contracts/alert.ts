@@ -9,11 +9,12 @@ import type { Paged } from './paging.js';
  * - `past-peak`: the ready window has ended; use or feed soon.
  * - `feeding-due`: the culture's routine says it wants feeding (counter daily, fridge weekly).
  * - `plan-step`: a hands-on step of a live bake plan (folds, bulk end, take out, preheat, bake done).
+ * - `comment`: someone wrote on a feeding or bake of yours, or of a student in your class.
  */
-export const ALERT_KINDS = ['culture-ready', 'past-peak', 'feeding-due', 'plan-step'] as const;
+export const ALERT_KINDS = ['culture-ready', 'past-peak', 'feeding-due', 'plan-step', 'comment'] as const;
 export type AlertKind = (typeof ALERT_KINDS)[number];
 
-/** `push` is part of the shape so preferences keep their form when web push lands; not sent yet. */
+/** `push` goes to every device (browser) the baker turned notifications on for. */
 export const ALERT_CHANNELS = ['in-app', 'email', 'push'] as const;
 export type AlertChannel = (typeof ALERT_CHANNELS)[number];
 /** Channels the baker may switch per kind; in the app is always on. */

@@ -59,6 +59,12 @@ export class AlertChannelsPatchDto implements Partial<Record<AlertKind, Partial<
   @ValidateNested()
   @Type(() => AlertChannelPatchDto)
   'plan-step'?: AlertChannelPatchDto;
+
+  @ApiPropertyOptional({ type: AlertChannelPatchDto })
+  @Omittable()
+  @ValidateNested()
+  @Type(() => AlertChannelPatchDto)
+  comment?: AlertChannelPatchDto;
 }
 
 export class UpdateAlertPreferencesDto implements UpdateAlertPreferencesRequest {
@@ -87,6 +93,7 @@ class AlertChannelsView implements Record<AlertKind, AlertChannelChoice> {
   @ApiProperty({ type: AlertChannelChoiceDto }) 'past-peak': AlertChannelChoiceDto;
   @ApiProperty({ type: AlertChannelChoiceDto }) 'feeding-due': AlertChannelChoiceDto;
   @ApiProperty({ type: AlertChannelChoiceDto }) 'plan-step': AlertChannelChoiceDto;
+  @ApiProperty({ type: AlertChannelChoiceDto }) comment: AlertChannelChoiceDto;
 }
 
 export class AlertPreferencesView implements AlertPreferences {

@@ -24,6 +24,7 @@ const KIND_LABELS: Record<AlertKind, { name: string; hint: string }> = {
   'past-peak': { name: 'Past peak', hint: 'The ready window has ended' },
   'feeding-due': { name: 'Feeding due', hint: 'Daily on the counter, weekly in the fridge' },
   'plan-step': { name: 'Bake plan steps', hint: 'Folds, end of bulk, out of the fridge, preheat, bake done' },
+  comment: { name: 'Comments', hint: 'A new comment on a feeding or bake you follow' },
 };
 
 interface SettingsValues {
