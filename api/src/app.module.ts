@@ -5,6 +5,10 @@ import { AdminModule } from './admin/admin.module.js';
 import { AlertModule } from './alert/alert.module.js';
 import { AuthModule } from './auth/auth.module.js';
 import { BakePlanModule } from './bake-plan/bake-plan.module.js';
+import { ClassLogsModule } from './class-logs/class-logs.module.js';
+import { ClassAccessModule } from './classroom/class-access.module.js';
+import { ClassroomModule } from './classroom/classroom.module.js';
+import { CommentModule } from './comment/comment.module.js';
 import { SessionGuard } from './common/session.guard.js';
 import { ConfigModule } from './config.module.js';
 import { CultureModule } from './culture/culture.module.js';
@@ -18,6 +22,7 @@ import { HealthModule } from './health/health.module.js';
 import { LogbookTransferModule } from './logbook-transfer/logbook-transfer.module.js';
 import { MailModule } from './mail/mail.module.js';
 import { PasswordResetModule } from './password-reset/password-reset.module.js';
+import { PushModule } from './push/push.module.js';
 import { RiseCheckModule } from './rise-check/rise-check.module.js';
 import { TemperatureModule } from './temperature/temperature.module.js';
 
@@ -45,6 +50,11 @@ export class AppModule {
         FormulaModule,
         BakePlanModule,
         AlertModule,
+        PushModule,
+        ClassAccessModule,
+        ClassroomModule,
+        ClassLogsModule,
+        CommentModule,
       ],
       providers: [{ provide: APP_GUARD, useClass: SessionGuard }],
     };

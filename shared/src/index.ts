@@ -19,6 +19,7 @@ export * from './contracts/logbook-transfer.js';
 export * from './contracts/formula.js';
 export * from './contracts/bake-plan.js';
 export * from './contracts/alert.js';
+export * from './contracts/classroom.js';
 export * from './alerts/index.js';
 export * from './contracts/password-reset.js';
 export * from './contracts/dev-mail.js';
