@@ -134,6 +134,40 @@ function createAppRouter() {
                   lazy: async () => ({ Component: (await import('./routes/alerts')).AlertsRoute }),
                 },
                 {
+                  path: 'classes',
+                  children: [
+                    {
+                      index: true,
+                      lazy: async () => ({ Component: (await import('./routes/classes')).ClassesRoute }),
+                    },
+                    {
+                      path: 'join',
+                      lazy: async () => ({ Component: (await import('./routes/class-join')).ClassJoinRoute }),
+                    },
+                    {
+                      path: ':classId',
+                      lazy: async () => ({ Component: (await import('./routes/class')).ClassRoute }),
+                    },
+                    {
+                      path: ':classId/cultures/:cultureId',
+                      lazy: async () => ({ Component: (await import('./routes/class-culture')).ClassCultureRoute }),
+                    },
+                    {
+                      path: ':classId/feedings/:feedingId',
+                      lazy: async () => ({ Component: (await import('./routes/class-feeding')).ClassFeedingRoute }),
+                    },
+                    {
+                      path: ':classId/plans/:planId',
+                      lazy: async () => ({ Component: (await import('./routes/class-plan')).ClassPlanRoute }),
+                    },
+                  ],
+                },
+                {
+                  // The link in an invitation e-mail; signed-out visitors sign in (or up) and come back.
+                  path: 'invites/:token',
+                  lazy: async () => ({ Component: (await import('./routes/class-invite')).ClassInviteRoute }),
+                },
+                {
                   path: 'admin',
                   element: (
                     <RequireRole role="admin" fallback={<NotAllowed what="This page is for Peakwise admins." />} />
