@@ -21,5 +21,6 @@ export * from './contracts/bake-plan.js';
 export * from './contracts/alert.js';
 export * from './contracts/classroom.js';
 export * from './alerts/index.js';
+export * from './classroom/index.js';
 export * from './contracts/password-reset.js';
 export * from './contracts/dev-mail.js';
