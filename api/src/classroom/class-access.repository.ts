@@ -51,6 +51,21 @@ export class ClassAccessRepository {
     return rows.map((r) => r.instructorId);
   }
 
+  /** A class `instructorId` teaches `studentId` in now, the latest joined (links in comment alerts). */
+  async sharedClass(instructorId: string, studentId: string): Promise<string | undefined> {
+    const row = await this.db
+      .selectFrom('bakingClass as c')
+      .innerJoin('classMember as m', 'm.classId', 'c.id')
+      .select('c.id')
+      .where('c.instructorId', '=', instructorId)
+      .where('m.accountId', '=', studentId)
+      .where('m.leftAt', 'is', null)
+      .orderBy('m.joinedAt', 'desc')
+      .limit(1)
+      .executeTakeFirst();
+    return row?.id;
+  }
+
   /** The viewer is the class's instructor. */
   async teaches(instructorId: string, classId: string): Promise<boolean> {
     const row = await this.db
