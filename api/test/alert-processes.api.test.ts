@@ -1,8 +1,5 @@
-import { spawn, type ChildProcess } from 'node:child_process';
 import { existsSync } from 'node:fs';
-import { createServer } from 'node:net';
-import { join } from 'node:path';
-import type { Account } from '@peakwise/shared';
+import { sql } from 'kysely';
 import PgBoss from 'pg-boss';
 import { afterAll, beforeAll, beforeEach, describe, expect, it } from 'vitest';
 import { ALERT_DUE_QUEUE, ALERT_QUEUE_SCHEMA, type AlertDueJob } from '../src/alert/alert.queue.js';
@@ -11,34 +8,35 @@ import { CLAIM_TIMEOUT_SECONDS } from '../src/alert/alert.worker.js';
 import { openDatabase, type DatabaseHandle } from '../src/db/database.js';
 import { startFakeSmtp, type FakeSmtp, type StoredMail } from '../src/dev/fake-smtp.js';
 import { MailService } from '../src/mail/mail.service.js';
-import { repoRoot } from '../src/repo-root.js';
-import { PASSWORD, uniqueEmail } from './helpers.js';
-import { resetDatabase, sessionCookie, testConfig } from './test-app.js';
+import {
+  API_ENTRY,
+  bakerWithCulture,
+  callApi,
+  startApi,
+  stopApi,
+  type ApiProcess,
+  type ApiProcessOptions,
+} from './alert-processes.fixtures.js';
+import { resetDatabase, testConfig } from './test-app.js';
 
 // The issue's exactly-once test: two real API processes (the build `npm test` makes) share one
 // database and race for the same deliveries. The queue is at-least-once (every delivery gets a job
 // in each process's reach); only the claim on alert_delivery may make the result exactly once.
 
-const ENTRY = process.env.PEAKWISE_API_ENTRY ?? join(repoRoot(), 'api', 'dist', 'src', 'main.js');
 const MAIL_FROM = 'Peakwise <no-reply@peakwise.invalid>';
 const ALERTS = 1000;
 const HOUR = 3_600_000;
-
-interface ApiProcess {
-  url: string;
-  child: ChildProcess;
-  output: () => string;
-}
 
 let mailbox: FakeSmtp;
 let handle: DatabaseHandle;
 let boss: PgBoss;
 let mail: MailService;
+let api: ApiProcessOptions;
 const processes: ApiProcess[] = [];
 
 beforeAll(async () => {
-  if (!existsSync(ENTRY)) {
-    throw new Error(`${ENTRY} is missing: this test runs the built API; run \`npm run build\` first`);
+  if (!existsSync(API_ENTRY)) {
+    throw new Error(`${API_ENTRY} is missing: this test runs the built API; run \`npm run build\` first`);
   }
   // Every message kept: the default box keeps the newest 200.
   mailbox = await startFakeSmtp({ smtpPort: 0, httpPort: 0, file: null, max: 10 * ALERTS });
@@ -49,7 +47,8 @@ beforeAll(async () => {
   handle = openDatabase(config.databaseUrl, 4);
   await resetDatabase(handle.db);
   mail = new MailService(config);
-  processes.push(...(await Promise.all([startApi(config.databaseUrl), startApi(config.databaseUrl)])));
+  api = { databaseUrl: config.databaseUrl, smtpUrl: mailbox.smtpUrl, mailFrom: MAIL_FROM };
+  processes.push(...(await Promise.all([startApi(api), startApi(api)])));
   // Only inserts jobs: no maintenance, no workers of its own (the two processes do the work).
   boss = new PgBoss({
     connectionString: config.databaseUrl,
@@ -72,10 +71,11 @@ afterAll(async () => {
 let accountId: string;
 let email: string;
 let cultureId: string;
+let cookie: string;
 beforeEach(async () => {
   await resetDatabase(handle.db);
   mailbox.clear();
-  ({ accountId, email, cultureId } = await bakerWithCulture(processes[0]!));
+  ({ accountId, email, cultureId, cookie } = await bakerWithCulture(processes[0]!));
 });
 
 describe('two API processes sharing one database', () => {
@@ -204,6 +204,29 @@ describe('two API processes sharing one database', () => {
     expect(copies()).toBe(2);
     expect(mailsTo(email)).toHaveLength(2);
   }, 60_000);
+  it('restarting a process twice queues no second job for a delivery that has one waiting', async () => {
+    const first = processes[0]!;
+    // Lead 0: the ready alert stays hours ahead, so its deliveries stay open through the restarts.
+    await callApi(first, cookie, 'PATCH', '/api/account/alert-preferences', { leadMinutes: 0 }, 200);
+    const feeding = { starterG: 20, flourG: 40, waterG: 40, temperatureC: 24 };
+    await callApi(first, cookie, 'POST', `/api/cultures/${cultureId}/feedings`, feeding, 201);
+    const open = await new AlertRepository(handle.db).openDeliveries();
+    expect(open.length).toBeGreaterThanOrEqual(3); // feeding due, ready, past peak: in the app at least
+
+    expect(await waitingJobs(open)).toEqual(open.map(() => 1));
+    for (let i = 0; i < 2; i++) await restart(0); // each start queues every open delivery again
+    expect(await waitingJobs(open)).toEqual(open.map(() => 1));
+
+    // A job that is no longer waiting (here: marked done while its delivery stayed open) is no
+    // reason to skip: the next start queues the delivery again, once.
+    await sql`UPDATE pgboss.job SET state = 'completed', completed_on = now()
+               WHERE name = ${ALERT_DUE_QUEUE} AND data->>'deliveryId' IN (${sql.join(open.map((d) => d.id))})`.execute(
+      handle.db,
+    );
+    expect(await waitingJobs(open)).toEqual(open.map(() => 0));
+    await restart(0);
+    expect(await waitingJobs(open)).toEqual(open.map(() => 1));
+  }, 90_000);
 });
 
 function job(deliveryId: string): PgBoss.JobInsert<AlertDueJob> {
@@ -252,93 +275,19 @@ async function waitFor(done: () => Promise<boolean>, timeoutMs: number, what: st
   }
 }
 
-/** A baker signed up through the first process, e-mail on for feeding reminders, with one culture. */
-async function bakerWithCulture(api: ApiProcess): Promise<{ accountId: string; email: string; cultureId: string }> {
-  const address = uniqueEmail('processes');
-  const signUp = await fetch(`${api.url}/api/auth/sign-up`, {
-    method: 'POST',
-    headers: { 'content-type': 'application/json' },
-    body: JSON.stringify({ email: address, displayName: 'Theo Park', password: PASSWORD, timeZone: 'UTC' }),
-  });
-  expect(signUp.status, await signUp.clone().text()).toBe(201);
-  const account = (await signUp.json()) as Account;
-  const cookie = sessionCookie(signUp.headers.getSetCookie());
-  const call = (method: string, path: string, body: unknown) =>
-    fetch(`${api.url}${path}`, {
-      method,
-      headers: { 'content-type': 'application/json', cookie },
-      body: JSON.stringify(body),
-    });
-  const prefs = await call('PATCH', '/api/account/alert-preferences', { channels: { 'feeding-due': { email: true } } });
-  expect(prefs.status, await prefs.clone().text()).toBe(200);
-  const culture = await call('POST', '/api/cultures', { name: 'Bramble' });
-  expect(culture.status, await culture.clone().text()).toBe(201);
-  return { accountId: account.id, email: address, cultureId: ((await culture.json()) as { id: string }).id };
+/** For each delivery, how many of its jobs wait to run (created, or retry after a failure). */
+async function waitingJobs(deliveries: { id: string }[]): Promise<number[]> {
+  const rows = await sql<{ deliveryId: string; n: string }>`
+    SELECT data->>'deliveryId' AS "deliveryId", count(*) AS n FROM pgboss.job
+     WHERE name = ${ALERT_DUE_QUEUE} AND state IN ('created', 'retry')
+       AND data->>'deliveryId' IN (${sql.join(deliveries.map((d) => d.id))})
+     GROUP BY 1`.execute(handle.db);
+  const counts = new Map(rows.rows.map((r) => [r.deliveryId, Number(r.n)]));
+  return deliveries.map((d) => counts.get(d.id) ?? 0);
 }
 
-function freePort(): Promise<number> {
-  return new Promise((resolve, reject) => {
-    const server = createServer();
-    server.once('error', reject);
-    server.listen(0, '127.0.0.1', () => {
-      const { port } = server.address() as { port: number };
-      server.close(() => resolve(port));
-    });
-  });
-}
-
-/** `node api/dist/src/main.js` as `npm start` runs it, on a free loopback port, up once /api/health answers. */
-async function startApi(databaseUrl: string): Promise<ApiProcess> {
-  const port = await freePort();
-  const child = spawn('node', [ENTRY], {
-    cwd: repoRoot(),
-    stdio: ['ignore', 'pipe', 'pipe'],
-    env: {
-      ...process.env,
-      DATABASE_URL: databaseUrl,
-      HOST: '127.0.0.1',
-      PORT: String(port),
-      SESSION_SECRET: 'test-only-secret-test-only-secret-0123456789',
-      NODE_ENV: 'test',
-      LOG_LEVEL: 'warn',
-      WEB_DIST: '',
-      DEV_MAIL_URL: '',
-      SMTP_URL: mailbox.smtpUrl,
-      MAIL_FROM,
-      PASSWORD_HASH_COST: '14',
-      SESSION_PRUNE_SECONDS: '0',
-      ALERT_POLLING_SECONDS: '0.5',
-    },
-  });
-  let output = '';
-  const keep = (chunk: Buffer) => {
-    output = (output + chunk.toString()).slice(-8000);
-  };
-  child.stdout.on('data', keep);
-  child.stderr.on('data', keep);
-  const url = `http://127.0.0.1:${port}`;
-  const until = Date.now() + 30_000;
-  for (;;) {
-    if (child.exitCode !== null) throw new Error(`the API exited early (${child.exitCode}):\n${output}`);
-    try {
-      if ((await fetch(`${url}/api/health`)).ok) break;
-    } catch {
-      // not listening yet
-    }
-    if (Date.now() > until) {
-      child.kill('SIGTERM');
-      throw new Error(`the API did not become healthy within 30 s:\n${output}`);
-    }
-    await new Promise((resolve) => setTimeout(resolve, 200));
-  }
-  return { url, child, output: () => output };
-}
-
-async function stopApi(api: ApiProcess): Promise<void> {
-  if (api.child.exitCode !== null) return;
-  const exited = new Promise<void>((resolve) => api.child.once('exit', () => resolve()));
-  api.child.kill('SIGTERM');
-  const timer = setTimeout(() => api.child.kill('SIGKILL'), 15_000);
-  await exited;
-  clearTimeout(timer);
+/** SIGTERM and start again; the new process has queued its open deliveries once it answers. */
+async function restart(index: number): Promise<void> {
+  await stopApi(processes[index]!);
+  processes[index] = await startApi(api);
 }

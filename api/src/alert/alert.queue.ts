@@ -1,6 +1,9 @@
 import { Inject, Injectable, Logger, type OnApplicationBootstrap, type OnApplicationShutdown } from '@nestjs/common';
+import { CompiledQuery, sql } from 'kysely';
 import PgBoss from 'pg-boss';
 import { APP_CONFIG, type AppConfig } from '../config.js';
+import { DATABASE } from '../db/database.module.js';
+import type { Database } from '../db/database.js';
 
 export const ALERT_DUE_QUEUE = 'alert-due';
 /** pg-boss keeps its tables here, apart from ours (sql/ never touches it). */
@@ -14,6 +17,9 @@ const DEFAULT_POLLING_SECONDS = 2;
 const BATCH_SIZE = 8;
 /** A queue that could not start (database down) tries again after this long. */
 const START_RETRY_MS = 15_000;
+
+/** First half of the advisory-lock key that serialises scheduling of one job key ("al", "rt"). */
+const SCHEDULE_LOCK_SPACE = 0x616c7274;
 
 export interface AlertDueJob {
   deliveryId: string;
@@ -36,7 +42,10 @@ export class AlertQueue implements OnApplicationBootstrap, OnApplicationShutdown
   private stopping = false;
   private retry: NodeJS.Timeout | null = null;
 
-  constructor(@Inject(APP_CONFIG) private readonly config: AppConfig) {
+  constructor(
+    @Inject(APP_CONFIG) private readonly config: AppConfig,
+    @Inject(DATABASE) private readonly db: Database,
+  ) {
     this.boss = new PgBoss({
       connectionString: config.databaseUrl,
       schema: ALERT_QUEUE_SCHEMA,
@@ -132,15 +141,34 @@ export class AlertQueue implements OnApplicationBootstrap, OnApplicationShutdown
     if (running) await this.boss.stop({ graceful: true, wait: true, timeout: 10_000 });
   }
 
-  /** A job at `at` for one delivery; the key includes the time so a moved delivery gets a fresh job. */
+  /**
+   * A job at `at` for one delivery; the key includes the time so a moved delivery gets a fresh job.
+   * pg-boss dedupes by singletonKey only under the short, singleton and stately queue policies or
+   * with singletonSeconds, and none of them means "one waiting job per key, created or retry"; on
+   * this standard queue the key is ignored. Every start queues every open delivery again, so
+   * without a check the jobs of a pending alert would pile up restart after restart. A job already waiting (created, or retry after a failure) for the same key is enough;
+   * a running or finished one is not, since the delivery is open again (a crash, a re-plan). The
+   * advisory lock makes check-then-send one step for processes starting together.
+   */
   async schedule(deliveryId: string, slotKey: string, at: Date): Promise<void> {
     await this.started;
-    await this.boss.send(ALERT_DUE_QUEUE, { deliveryId } satisfies AlertDueJob, {
-      startAfter: at,
-      singletonKey: `${slotKey}:${deliveryId}:${at.getTime()}`,
-      retryLimit: 5,
-      retryDelay: 30,
-      retryBackoff: true,
+    const singletonKey = `${slotKey}:${deliveryId}:${at.getTime()}`;
+    await this.db.transaction().execute(async (trx) => {
+      await sql`SELECT pg_advisory_xact_lock(${SCHEDULE_LOCK_SPACE}, hashtext(${singletonKey}))`.execute(trx);
+      const waiting = await sql`
+        SELECT 1 FROM ${sql.table(`${ALERT_QUEUE_SCHEMA}.job`)}
+         WHERE name = ${ALERT_DUE_QUEUE} AND singleton_key = ${singletonKey} AND state IN ('created', 'retry')
+         LIMIT 1`.execute(trx);
+      if (waiting.rows.length > 0) return;
+      await this.boss.send(ALERT_DUE_QUEUE, { deliveryId } satisfies AlertDueJob, {
+        startAfter: at,
+        singletonKey,
+        retryLimit: 5,
+        retryDelay: 30,
+        retryBackoff: true,
+        // Inside this transaction, so the lock is held until the job is visible to the next check.
+        db: { executeSql: (text, values) => trx.executeQuery(CompiledQuery.raw(text, values)) },
+      });
     });
   }
 }
