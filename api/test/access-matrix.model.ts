@@ -1,0 +1,102 @@
+// The words of the authorisation matrix (access-matrix.api.test.ts): who asks, whose object they
+// ask about, what they should get, and the policies that turn the first two into the third.
+
+/** Everyone the matrix asks as. Bakers A and B own logbooks; each instructor has a class. */
+export const ROLES = ['anonymous', 'bakerA', 'bakerB', 'instructorA', 'instructorOther', 'admin'] as const;
+export type RoleName = (typeof ROLES)[number];
+
+/** The owners of the objects a route is tried on: baker A's and baker B's. */
+export const PARTIES = ['A', 'B'] as const;
+export type Party = (typeof PARTIES)[number];
+
+/**
+ * How a caller stands to an object: its owner; an instructor whose class the owner belongs to
+ * (the owner's logs are shared with them, read-only); anyone else. Anonymous callers have none.
+ */
+export type Relation = 'owned' | 'shared' | 'foreign';
+
+/** The expected answer, by status class. */
+export type Outcome = 'ok' | 'unauth' | 'forbidden' | 'hidden';
+
+export const OUTCOME_STATUS: Record<Outcome, string> = {
+  ok: '2xx',
+  unauth: '401',
+  forbidden: '403',
+  hidden: '404',
+};
+
+export function outcomeOf(status: number): Outcome | 'other' {
+  if (status >= 200 && status < 300) return 'ok';
+  if (status === 401) return 'unauth';
+  if (status === 403) return 'forbidden';
+  if (status === 404) return 'hidden';
+  return 'other';
+}
+
+/**
+ * One party's objects, made fresh through the API (and one alert row in the database) before
+ * every route that writes. Classroom ids join here once its routes exist.
+ */
+export interface ObjectSet {
+  party: Party;
+  accountId: string;
+  cultureId: string;
+  feedingId: string;
+  riseCheckId: string;
+  temperatureId: string;
+  formulaId: string;
+  planId: string;
+  /** A step of the plan already checked off, so undoing it has something to undo. */
+  checkedStepId: string;
+  planReadingId: string;
+  alertId: string;
+}
+
+/** Who a request is sent as. */
+export interface Caller {
+  role: RoleName;
+  /** `peakwise.sid=…`, or null for anonymous. */
+  cookie: string | null;
+  /** The account's own sign-in, for routes whose valid body is the caller's own credentials. */
+  email: string | null;
+  password: string | null;
+}
+
+/** Private strings of a party, by kind, searched for in every answer to someone else. */
+export type MarkerKind = 'account' | 'logbook';
+
+export interface Policy {
+  /** Shown in failures and in the summary. */
+  name: string;
+  outcome(role: RoleName, relation: Relation | null): Outcome;
+}
+
+function signedIn(name: string, rule: (role: RoleName, relation: Relation | null) => Outcome): Policy {
+  return { name, outcome: (role, relation) => (role === 'anonymous' ? 'unauth' : rule(role, relation)) };
+}
+
+/** No session needed; the answer is the same for everyone. */
+export const PUBLIC: Policy = { name: 'public', outcome: () => 'ok' };
+
+/** Any signed-in account, acting on itself (its own account, lists, new objects). */
+export const SIGNED_IN = signedIn('signed in', () => 'ok');
+
+/** Admins only; other accounts are told no (403), as the route itself is no secret. */
+export const ADMIN_ONLY = signedIn('admin only', (role) => (role === 'admin' ? 'ok' : 'forbidden'));
+
+/**
+ * The object's owner only. Everyone else gets 404, exactly as for an id that does not exist, so
+ * ids reveal nothing — also an instructor the logs are shared with (they read through Classroom)
+ * and an admin (admins never need to read private logs).
+ */
+export const OWNER_ONLY = signedIn('owner only', (_role, relation) => (relation === 'owned' ? 'ok' : 'hidden'));
+
+/** A shared read: the owner and the instructor of the owner's class; 404 for everyone else. */
+export const OWNER_OR_SHARED = signedIn('owner or class instructor', (_role, relation) =>
+  relation === 'owned' || relation === 'shared' ? 'ok' : 'hidden',
+);
+
+/** An instructor's read of a student's log: the class's instructor only (the owner has their own routes). */
+export const SHARED_ONLY = signedIn('class instructor only', (_role, relation) =>
+  relation === 'shared' ? 'ok' : 'hidden',
+);
