@@ -1,6 +1,8 @@
-import Typography from '@mui/material/Typography';
+import { useParams } from 'react-router-dom';
+import { InvitePage } from '@/features/class-join/components/invite-page';
 
-/** An invitation link: what joining shares, then accept (being built). */
+/** The link in an invitation e-mail (inside RequireAuth: a signed-out visitor signs in and returns). */
 export function ClassInviteRoute() {
-  return <Typography>Coming soon.</Typography>;
+  const { token = '' } = useParams();
+  return <InvitePage key={token} token={token} />;
 }

@@ -1,6 +1,8 @@
-import Typography from '@mui/material/Typography';
+import { useSearchParams } from 'react-router-dom';
+import { JoinCodePage } from '@/features/class-join/components/join-code-page';
 
-/** Join a class with a code (being built). */
+/** /classes/join, or /classes/join?code=WXYZ2345 from a link the instructor shared. */
 export function ClassJoinRoute() {
-  return <Typography>Coming soon.</Typography>;
+  const [params] = useSearchParams();
+  return <JoinCodePage initialCode={params.get('code') ?? ''} />;
 }
