@@ -17,7 +17,6 @@ export interface InviteRow {
 export interface NewInvite {
   email: string;
   tokenHash: string;
-  expiresAt: Date;
 }
 
 const COLUMNS = ['id', 'classId', 'email', 'createdAt', 'expiresAt', 'usedAt', 'revokedAt'] as const;
@@ -27,11 +26,14 @@ const COLUMNS = ['id', 'classId', 'email', 'createdAt', 'expiresAt', 'usedAt', '
 export class ClassInviteRepository {
   constructor(@Inject(DATABASE) private readonly db: Database) {}
 
-  /** All in one statement: a request either invites every address or none. */
-  insertMany(classId: string, invites: NewInvite[]): Promise<InviteRow[]> {
+  /**
+   * All in one statement: a request either invites every address or none. The expiry counts from
+   * the row's own created_at (the database clock), so the two differ by exactly `ttlDays`.
+   */
+  insertMany(classId: string, invites: NewInvite[], ttlDays: number): Promise<InviteRow[]> {
     return this.db
       .insertInto('classInvite')
-      .values(invites.map((i) => ({ classId, ...i })))
+      .values(invites.map((i) => ({ classId, ...i, expiresAt: sql<Date>`now() + make_interval(days => ${ttlDays})` })))
       .returning([...COLUMNS])
       .execute();
   }

@@ -12,8 +12,6 @@ import type { ClassRow } from './class.repository.js';
 import { ClassService } from './class.service.js';
 import { hashInviteToken, newInviteToken, toClassInvite } from './invite-token.js';
 
-const DAY_MS = 24 * 3600_000;
-
 /** "7 March 2026": a calendar date, so no time zone can move it. */
 export function longDate(date: string): string {
   return new Intl.DateTimeFormat('en-GB', { day: 'numeric', month: 'long', year: 'numeric', timeZone: 'UTC' }).format(
@@ -38,11 +36,11 @@ export class ClassInviteService {
    */
   async create(account: AccountRecord, classId: string, emails: string[]): Promise<CreateClassInvitesResponse> {
     const row = await this.classes.requireInstructor(account, classId);
-    const expiresAt = new Date(Date.now() + CLASS_INVITE_TTL_DAYS * DAY_MS);
     const tokens = new Map([...new Set(emails)].map((email) => [email, newInviteToken()]));
     const stored = await this.invites.insertMany(
       classId,
-      [...tokens].map(([email, token]) => ({ email, tokenHash: hashInviteToken(token), expiresAt })),
+      [...tokens].map(([email, token]) => ({ email, tokenHash: hashInviteToken(token) })),
+      CLASS_INVITE_TTL_DAYS,
     );
     for (const invite of stored) void this.sendInvite(row, invite, tokens.get(invite.email)!);
     return { invites: stored.map((i) => toClassInvite(i)) };
