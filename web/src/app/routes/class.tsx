@@ -1,6 +1,8 @@
-import Typography from '@mui/material/Typography';
+import { useParams } from 'react-router-dom';
+import { ClassPage } from '@/features/classroom/components/class-page';
 
-/** One class: roster, progress chart, invitations (being built). */
+/** One class: the instructor's roster, chart, invitations and join code; a student's plain class page. */
 export function ClassRoute() {
-  return <Typography>Coming soon.</Typography>;
+  const { classId = '' } = useParams();
+  return <ClassPage key={classId} classId={classId} />;
 }

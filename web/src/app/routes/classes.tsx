@@ -1,6 +1,6 @@
-import Typography from '@mui/material/Typography';
+import { ClassesPage } from '@/features/classroom/components/classes-page';
 
-/** Classes the baker teaches or is in (being built). */
+/** Classes the baker teaches or is in. */
 export function ClassesRoute() {
-  return <Typography>Coming soon.</Typography>;
+  return <ClassesPage />;
 }
