@@ -1,3 +1,5 @@
+import { readFileSync } from 'node:fs';
+
 /** Everything the API reads from its environment, checked once at start-up. */
 export interface AppConfig {
   databaseUrl: string;
@@ -17,7 +19,24 @@ export interface AppConfig {
   mail: MailConfig;
   /** How often the alert worker polls its queue, seconds (pg-boss, at least 0.5); 2 when left out. */
   alertPollingSeconds?: number;
+  /** Web push (api/src/push/); left out, the defaults below apply (tests). */
+  push?: PushConfig;
 }
+
+export interface PushConfig {
+  /** VAPID contact (RFC 8292 §2.1): a mailto: or https: URL push services can reach us at. */
+  subject: string;
+  /** PEM of one more certificate to trust for push endpoints: the fake push service's (PUSH_CA_FILE). */
+  extraCa: string | null;
+  /** Accept endpoints on loopback or private addresses: development and tests only, never production. */
+  allowPrivateEndpoints: boolean;
+}
+
+export const DEFAULT_PUSH_CONFIG: PushConfig = {
+  subject: 'mailto:no-reply@peakwise.invalid',
+  extraCa: null,
+  allowPrivateEndpoints: true,
+};
 
 export interface MailConfig {
   /** SMTP server for outgoing mail; `npm start` runs a fake one (api/src/dev/fake-smtp.main.ts). */
@@ -59,6 +78,11 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): AppConfig {
       from: env.MAIL_FROM || 'Peakwise <no-reply@peakwise.invalid>',
       publicUrl: (env.PUBLIC_URL || `http://${publicHost(env.HOST)}:${env.PORT ?? 3000}`).replace(/\/+$/, ''),
       devMailUrl: env.NODE_ENV === 'production' ? null : env.DEV_MAIL_URL || null,
+    },
+    push: {
+      subject: env.PUSH_SUBJECT || 'mailto:no-reply@peakwise.invalid',
+      extraCa: env.PUSH_CA_FILE ? readFileSync(env.PUSH_CA_FILE, 'utf8') : null,
+      allowPrivateEndpoints: env.NODE_ENV !== 'production',
     },
   };
 }

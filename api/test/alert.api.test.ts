@@ -319,14 +319,14 @@ describe('alert preferences', () => {
     expect(changed).toMatchObject({
       leadMinutes: 30,
       quietHours: { from: '22:00', until: '07:00' },
-      channels: { 'past-peak': { email: false, push: false }, 'culture-ready': { email: true, push: false } },
+      channels: { 'past-peak': { email: false, push: true }, 'culture-ready': { email: true, push: true } },
     });
     expect(await setPrefs({ quietHours: null })).toMatchObject({ quietHours: null, leadMinutes: 30 });
     expectFieldErrors(
       await call('PATCH', '/api/account/alert-preferences', {
         leadMinutes: 241,
         quietHours: { from: '25:00', until: '7' },
-        channels: { 'plan-step': { push: true } },
+        channels: { 'plan-step': { push: 'yes' } },
       }),
       ['leadMinutes', 'quietHours.from', 'quietHours.until', 'channels.plan-step.push'],
     );

@@ -5,7 +5,8 @@ import { MailService } from '../mail/mail.service.js';
 import { renderMail } from '../mail/mail.template.js';
 import { AlertClock } from './alert.clock.js';
 import { AlertQueue, type AlertDueJob } from './alert.queue.js';
-import { AlertRepository, type ClaimedDelivery } from './alert.repository.js';
+import { AlertRepository, type AlertRecipient, type ClaimedDelivery } from './alert.repository.js';
+import { PushSender } from '../push/push.sender.js';
 
 /**
  * A claim older than this is taken to belong to a worker that died mid-send and may be taken over.
@@ -24,6 +25,7 @@ export class AlertWorker implements OnModuleInit {
     private readonly queue: AlertQueue,
     private readonly clock: AlertClock,
     private readonly mail: MailService,
+    private readonly push: PushSender,
     @Inject(APP_CONFIG) private readonly config: AppConfig,
   ) {}
 
@@ -50,8 +52,7 @@ export class AlertWorker implements OnModuleInit {
     try {
       if (claimed.channel === 'in-app') return await this.alerts.markSent(claimed, now);
       if (claimed.channel === 'email') return await this.sendEmail(claimed, now);
-      // Push is not built yet; the scheduler never plans it, so this only drops a stray row.
-      await this.alerts.markDropped(claimed.deliveryId);
+      await this.sendPush(claimed, now);
     } catch (error) {
       const message = error instanceof Error ? error.message : String(error);
       await this.alerts.release(claimed.deliveryId, { lastError: message.slice(0, 2000) });
@@ -60,30 +61,63 @@ export class AlertWorker implements OnModuleInit {
     }
   }
 
-  /** Preferences are read again at send time: quiet hours or a switched-off channel apply now. */
-  private async sendEmail(claimed: ClaimedDelivery, now: Date): Promise<void> {
+  /**
+   * Preferences are read again at send time: quiet hours or a switched-off channel apply now.
+   * Answers the recipient when the message should go out now; otherwise it has been dropped or
+   * held (released with a later time and a new job) and answers null.
+   */
+  private async gate(claimed: ClaimedDelivery, now: Date, channel: 'email' | 'push'): Promise<AlertRecipient | null> {
     const [prefs, recipient] = await Promise.all([
       this.alerts.preferences(claimed.accountId),
       this.alerts.recipient(claimed.accountId),
     ]);
     const preferences = prefs ?? defaultAlertPreferences();
-    if (!recipient || !channelsFor(preferences, claimed.kind).includes('email'))
-      return this.alerts.markDropped(claimed.deliveryId);
+    if (!recipient || !channelsFor(preferences, claimed.kind).includes(channel)) {
+      await this.alerts.markDropped(claimed.deliveryId);
+      return null;
+    }
     const decision = deliveryFor({
-      channel: 'email',
+      channel,
       dueAt: claimed.dueAt.toISOString(),
       staleAt: claimed.staleAt.toISOString(),
       quietHours: preferences.quietHours,
       timeZone: recipient.timeZone,
       notBefore: now.toISOString(),
     });
-    if (decision.action === 'drop') return this.alerts.markDropped(claimed.deliveryId);
+    if (decision.action === 'drop') {
+      await this.alerts.markDropped(claimed.deliveryId);
+      return null;
+    }
     const at = new Date(decision.at);
     if (at.getTime() > now.getTime()) {
       // Quiet hours began since it was planned: hold it until they end.
       await this.alerts.release(claimed.deliveryId, { sendAfter: at });
-      return this.queue.schedule(claimed.deliveryId, claimed.slotKey, at);
+      await this.queue.schedule(claimed.deliveryId, claimed.slotKey, at);
+      return null;
     }
+    return recipient;
+  }
+
+  /**
+   * To every device the baker turned on. One delivery covers all devices: once any device took it
+   * (or every device is gone), it is recorded, so a device that failed is not retried at the cost
+   * of a second copy on the others. Only when no device took it and one failed is it retried.
+   */
+  private async sendPush(claimed: ClaimedDelivery, now: Date): Promise<void> {
+    if (!(await this.gate(claimed, now, 'push'))) return;
+    const round = await this.push.toAccount(
+      claimed.accountId,
+      { title: claimed.title, body: claimed.body, url: claimed.linkPath, tag: claimed.slotKey },
+      Math.max(60, Math.round((claimed.staleAt.getTime() - now.getTime()) / 1000)),
+    );
+    if (round.delivered > 0) return this.alerts.markSent(claimed, new Date());
+    if (round.failed.length > 0) throw new Error(round.failed[0]);
+    await this.alerts.markDropped(claimed.deliveryId); // no device, or every one gone
+  }
+
+  private async sendEmail(claimed: ClaimedDelivery, now: Date): Promise<void> {
+    const recipient = await this.gate(claimed, now, 'email');
+    if (!recipient) return;
     const when = new Intl.DateTimeFormat('en-GB', {
       timeZone: recipient.timeZone,
       weekday: 'short',
@@ -93,7 +127,9 @@ export class AlertWorker implements OnModuleInit {
     const rendered = renderMail(
       {
         heading: claimed.title,
-        paragraphs: [claimed.body, `Due ${when} (${recipient.timeZone}).`],
+        // A comment is news, not a reminder: it has no time of its own to announce.
+        paragraphs:
+          claimed.kind === 'comment' ? [claimed.body] : [claimed.body, `Due ${when} (${recipient.timeZone}).`],
         action: { label: 'Open in Peakwise', path: claimed.linkPath },
         note: 'You get this because e-mail is on for this kind of alert.',
       },

@@ -9,7 +9,7 @@ import {
   type UpdateAlertPreferencesRequest,
 } from '@peakwise/shared';
 import { Type } from 'class-transformer';
-import { Equals, IsBoolean, IsInt, Matches, Max, Min, ValidateNested } from 'class-validator';
+import { IsBoolean, IsInt, Matches, Max, Min, ValidateNested } from 'class-validator';
 import { Omittable } from '../../common/dto-helpers.js';
 import { Clearable } from '../../common/log-fields.js';
 
@@ -23,15 +23,12 @@ export class AlertQuietHoursDto implements AlertQuietHours {
 
 export class AlertChannelChoiceDto implements AlertChannelChoice {
   @ApiProperty() email: boolean;
-  @ApiProperty({ description: 'Web push: not available yet, always false' }) push: boolean;
+  @ApiProperty({ description: 'Web push, to every device turned on in the alert settings' }) push: boolean;
 }
 
 export class AlertChannelPatchDto implements Partial<AlertChannelChoice> {
   @ApiPropertyOptional() @Omittable() @IsBoolean({ message: 'Choose true or false.' }) email?: boolean;
-  @ApiPropertyOptional({ description: 'Web push is not available yet: only false is accepted' })
-  @Omittable()
-  @Equals(false, { message: 'Web push is not available yet.' })
-  push?: boolean;
+  @ApiPropertyOptional() @Omittable() @IsBoolean({ message: 'Choose true or false.' }) push?: boolean;
 }
 
 /** Each kind optional; a kind left out keeps its channels. */
