@@ -10,8 +10,9 @@ import type { PageQuery, Paged, SortOrder } from './paging.js';
 //   GET /api/classes/:classId/members · DELETE /api/classes/:classId/members/:studentId (instructor)
 //   POST /api/classes/:classId/leave                                    (student; 204)
 //   GET/POST /api/classes/:classId/invites · DELETE /api/classes/:classId/invites/:inviteId
-//   GET /api/class-invites/:token · POST /api/class-invites/:token/accept
-//   GET /api/class-join/:code · POST /api/class-join
+//   GET /api/class-invites/:token · POST /api/class-invites/:token/accept   (200; 403 sent to another
+//     address or your own class, 410 used/expired/revoked, 404 unknown)
+//   GET /api/class-join/:code · POST /api/class-join                     (200; code case- and space-blind)
 //   GET /api/classes/:classId/roster · /roster.csv · /progress          (instructor)
 //   Read-only drill-down, instructor of a class the owner is a current member of (same shapes as the
 //   owner's routes): GET /api/classes/:classId/students/:studentId/cultures · …/students/:studentId/plans
@@ -22,7 +23,7 @@ import type { PageQuery, Paged, SortOrder } from './paging.js';
 
 export const CLASS_NAME_MAX_LENGTH = 120;
 export const CLASS_DESCRIPTION_MAX_LENGTH = 2000;
-/** A class runs at most this long (a year covers every course we have heard of). */
+/** A class runs at most this long, first and last day counted (a year covers every course we have heard of). */
 export const CLASS_MAX_DAYS = 366;
 /** Join codes: 8 characters from an alphabet without look-alikes (no I, O, 0, 1). */
 export const JOIN_CODE_ALPHABET = 'ABCDEFGHJKLMNPQRSTUVWXYZ23456789';
