@@ -211,6 +211,21 @@ describe('accepting an invitation', () => {
     expect(members).toHaveLength(1);
   });
 
+  it('a retried accept with the same Idempotency-Key gets the first answer, not 410', async () => {
+    const { student, token } = await invitedStudent();
+    const retry = () =>
+      t.app.inject({
+        method: 'POST',
+        url: `/api/class-invites/${token}/accept`,
+        headers: { cookie: student.cookie, 'idempotency-key': 'accept-once-1' },
+      });
+    const first = await created<BakingClass>(retry(), 200);
+    const second = await retry();
+    expect(second.statusCode, second.body).toBe(200);
+    expect(second.headers['idempotent-replayed']).toBe('true');
+    expect(second.json<BakingClass>().id).toBe(first.id);
+  });
+
   it('unknown links are 404, signed out is 401, the instructor cannot join their own class', async () => {
     const { student } = await invitedStudent();
     expectError(await preview('A'.repeat(43), student.cookie), 404);
