@@ -19,10 +19,12 @@ interface Props {
   busyStep: string | null;
   onDone: (step: PlanStep, at?: string) => void;
   onUndo: (step: PlanStep) => void;
+  /** Someone else's bake shown read-only (an instructor's view): the now-marker, no Done or Undo. */
+  readOnly?: boolean;
 }
 
 /** The plan top to bottom with the now-marker; the current step carries "Done", the last done one "Undo". */
-export function LiveTimeline({ plan, clock, now, unit, active, busyStep, onDone, onUndo }: Props) {
+export function LiveTimeline({ plan, clock, now, unit, active, busyStep, onDone, onUndo, readOnly }: Props) {
   const steps = plan.live.steps;
   const undoable = active ? lastDoneStep(steps, plan.checked) : null;
   // Each caution in full where it first applies; later steps name it briefly.
@@ -91,7 +93,7 @@ export function LiveTimeline({ plan, clock, now, unit, active, busyStep, onDone,
             now={now}
             unit={unit}
             fullCautions={fullAt.get(step.id) ?? new Set()}
-            controls={controls}
+            controls={readOnly ? undefined : controls}
           />
         );
       })}

@@ -29,23 +29,24 @@ export interface JoinProblem {
 }
 
 /**
- * The API's refusals of an invitation, in words: 410 used, expired or revoked (its own message
- * says which); 403 sent to another address; 404 no such invitation.
+ * The API's refusals of an invitation, in words: 410 used, expired or revoked (the server's own
+ * message says which and what to do); 403 not for this account (sent to another address, or the
+ * viewer teaches the class), naming who is signed in; 404 no such invitation.
  */
 export function inviteProblem(error: unknown, signedInEmail: string): JoinProblem {
   const status = isApiError(error) ? error.status : 0;
+  const said = isApiError(error) ? error.message : '';
   if (status === 410)
     return {
       kind: 'gone',
       title: 'This invitation can no longer be used',
-      message:
-        `${isApiError(error) ? error.message : ''} Ask your instructor to send a new one, or for the class’s join code.`.trim(),
+      message: said || 'Ask your instructor for a new one, or for the class’s join code.',
     };
   if (status === 403)
     return {
       kind: 'other-account',
-      title: 'This invitation is for another address',
-      message: `You are signed in as ${signedInEmail}, but the invitation was sent to a different e-mail address. Sign out, then sign in (or sign up) with the address the invitation went to.`,
+      title: 'This invitation is not for this account',
+      message: `${said} You are signed in as ${signedInEmail}.`.trim(),
     };
   if (status === 404)
     return {
@@ -57,6 +58,6 @@ export function inviteProblem(error: unknown, signedInEmail: string): JoinProble
   return {
     kind: 'failed',
     title: 'The invitation did not load',
-    message: isApiError(error) ? error.message : 'Something went wrong. Please try again.',
+    message: said || 'Something went wrong. Please try again.',
   };
 }

@@ -1,4 +1,10 @@
-import { formatTemperature, type Account, type Feeding, type RiseCheck } from '@peakwise/shared';
+import {
+  formatTemperature,
+  type Account,
+  type Feeding,
+  type RiseCheck,
+  type RiseCheckListResponse,
+} from '@peakwise/shared';
 import DeleteOutlined from '@mui/icons-material/DeleteOutlined';
 import EditOutlined from '@mui/icons-material/EditOutlined';
 import Card from '@mui/material/Card';
@@ -10,7 +16,7 @@ import TableCell from '@mui/material/TableCell';
 import TableHead from '@mui/material/TableHead';
 import TableRow from '@mui/material/TableRow';
 import Typography from '@mui/material/Typography';
-import { useQuery } from '@tanstack/react-query';
+import { useQuery, type UseQueryResult } from '@tanstack/react-query';
 import { useState } from 'react';
 import { LoadError } from '@/components/feedback/load-error';
 import { VisuallyHidden } from '@/components/visually-hidden';
@@ -24,9 +30,17 @@ import { secondary, TakenCell } from './taken-cell';
 
 const riseWords = (pct: number | null) => (pct === null ? '—' : `${pct > 0 ? '+' : ''}${pct} %`);
 
+interface RiseChecksCardProps {
+  feeding: Feeding;
+  account: Account;
+  /** Someone else's feeding shown read-only (an instructor's view): its checks come from there, no edit or delete. */
+  readOnly?: { checks: UseQueryResult<RiseCheckListResponse> };
+}
+
 /** The feeding's rise checks, oldest first, each to correct or remove. */
-export function RiseChecksCard({ feeding, account }: { feeding: Feeding; account: Account }) {
-  const checks = useQuery(riseChecksQueryOptions(feeding.id));
+export function RiseChecksCard({ feeding, account, readOnly }: RiseChecksCardProps) {
+  const own = useQuery({ ...riseChecksQueryOptions(feeding.id), enabled: !readOnly });
+  const checks = readOnly?.checks ?? own;
   const remove = useDeleteRiseCheck();
   const [editing, setEditing] = useState<RiseCheck | null>(null);
   const [deleting, setDeleting] = useState<RiseCheck | null>(null);
@@ -50,9 +64,11 @@ export function RiseChecksCard({ feeding, account }: { feeding: Feeding; account
                 <TableCell>Taken</TableCell>
                 <TableCell align="right">Height</TableCell>
                 <TableCell align="right">Rise</TableCell>
-                <TableCell align="right" sx={{ px: 0 }}>
-                  <VisuallyHidden>Edit or delete</VisuallyHidden>
-                </TableCell>
+                {!readOnly && (
+                  <TableCell align="right" sx={{ px: 0 }}>
+                    <VisuallyHidden>Edit or delete</VisuallyHidden>
+                  </TableCell>
+                )}
               </TableRow>
             </TableHead>
             <TableBody>
@@ -68,14 +84,16 @@ export function RiseChecksCard({ feeding, account }: { feeding: Feeding; account
                     )}
                   </TableCell>
                   <TableCell align="right">{riseWords(rise(c))}</TableCell>
-                  <TableCell align="right" sx={{ px: 0, whiteSpace: 'nowrap' }}>
-                    <IconButton aria-label={`Edit rise check at ${time(c)}`} onClick={() => setEditing(c)}>
-                      <EditOutlined />
-                    </IconButton>
-                    <IconButton aria-label={`Delete rise check at ${time(c)}`} onClick={() => setDeleting(c)}>
-                      <DeleteOutlined />
-                    </IconButton>
-                  </TableCell>
+                  {!readOnly && (
+                    <TableCell align="right" sx={{ px: 0, whiteSpace: 'nowrap' }}>
+                      <IconButton aria-label={`Edit rise check at ${time(c)}`} onClick={() => setEditing(c)}>
+                        <EditOutlined />
+                      </IconButton>
+                      <IconButton aria-label={`Delete rise check at ${time(c)}`} onClick={() => setDeleting(c)}>
+                        <DeleteOutlined />
+                      </IconButton>
+                    </TableCell>
+                  )}
                 </TableRow>
               ))}
             </TableBody>
