@@ -11,8 +11,10 @@ import { PasswordService } from '../auth/password.service.js';
 import type { AppConfig } from '../config.js';
 import { openDatabase } from '../db/database.js';
 import { scheduleDemoAlerts } from './demo-alerts.js';
+import { seedDemoClassroom } from './demo-classroom.js';
 import { seedDemoFormulas } from './demo-formulas.js';
 import { seedDemoLogbook } from './demo-logbook.js';
+import { registerDemoPushDevice } from './demo-push.js';
 
 // The invented Larkspur Community Kitchen and its "Weekend Levain" class.
 const PEOPLE: { displayName: string; email: string; role: Role }[] = [
@@ -48,6 +50,10 @@ try {
     const now = new Date();
     const { feedings, cultureIds } = await seedDemoLogbook(db, accountIds, now);
     process.stdout.write(`seeded ${feedings} demo feedings with their rise checks\n`);
+    if (await seedDemoClassroom(db, accountIds, cultureIds, now)) process.stdout.write('seeded the demo class\n');
+    const theo = accountIds.get('theo@larkspur-kitchen.example');
+    if (theo && (await registerDemoPushDevice(db, theo)))
+      process.stdout.write('gave Theo a demo phone on the fake push service\n');
     const alerts = await scheduleDemoAlerts(db, [...cultureIds.values()], now);
     process.stdout.write(`scheduled ${alerts} demo alerts (the API queues them when it starts)\n`);
     process.stdout.write(`seeded ${await seedDemoFormulas(db, accountIds)} demo formulas\n`);
