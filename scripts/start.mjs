@@ -18,6 +18,7 @@ import {
 } from './lib/project.mjs';
 import { readDemoAccounts } from './lib/demo.mjs';
 import { startFakeMail } from './lib/fake-mail.mjs';
+import { startFakePush } from './lib/fake-push.mjs';
 import { fail, log, run } from './lib/run.mjs';
 
 const port = Number(process.env.PORT ?? 3000);
@@ -47,14 +48,15 @@ if (!databaseUrl) {
 }
 
 let api = null;
-// The local fake mail server, unless SMTP_URL names a real one.
+// The local fake mail server and push service, unless SMTP_URL names a real mail server.
 let fakeMail = null;
+let fakePush = null;
 let stopping = false;
 function stopAll(code) {
   if (stopping) return;
   stopping = true;
   const finish = async () => {
-    await fakeMail?.stop();
+    await Promise.all([fakeMail?.stop(), fakePush?.stop()]);
     cluster?.stop();
     log(code === 0 ? 'stopped' : `stopped (exit ${code})`);
     process.exit(code);
@@ -72,14 +74,13 @@ process.on('SIGTERM', () => stopAll(0));
 
 try {
   buildIfStale();
-  const env = { ...process.env, DATABASE_URL: databaseUrl, PEAKWISE_DATA_DIR: dataDir };
-  run('node', [cliEntry('migrate')], { env });
-  run('node', [cliEntry('seed')], { env });
 } catch (error) {
   process.stderr.write(`[peakwise] ${error.message}\n`);
   stopAll(1);
 }
 
+// The local stand-ins for hosted services, unless a real one is named: started before the seed,
+// which gives a demo baker a device on the fake push service.
 if (!stopping && !process.env.SMTP_URL) {
   try {
     fakeMail = await startFakeMail({
@@ -88,6 +89,27 @@ if (!stopping && !process.env.SMTP_URL) {
       file: join(dataDir, 'fake-mail.json'),
       quiet: true,
     });
+    fakePush = await startFakePush({
+      port: Number(process.env.FAKE_PUSH_PORT ?? 2527),
+      certFile: join(dataDir, 'fake-push-cert.pem'),
+      file: join(dataDir, 'fake-push.json'),
+      quiet: true,
+    });
+  } catch (error) {
+    process.stderr.write(`[peakwise] ${error.message}\n`);
+    stopAll(1);
+  }
+}
+const fakeEnv = {
+  ...(fakeMail ? { SMTP_URL: fakeMail.smtpUrl, DEV_MAIL_URL: fakeMail.httpUrl } : {}),
+  ...(fakePush ? { FAKE_PUSH_URL: fakePush.url, DEV_PUSH_URL: fakePush.url, PUSH_CA_FILE: fakePush.certFile } : {}),
+};
+
+if (!stopping) {
+  try {
+    const env = { ...process.env, DATABASE_URL: databaseUrl, PEAKWISE_DATA_DIR: dataDir, ...fakeEnv };
+    run('node', [cliEntry('migrate')], { env });
+    run('node', [cliEntry('seed')], { env });
   } catch (error) {
     process.stderr.write(`[peakwise] ${error.message}\n`);
     stopAll(1);
@@ -104,7 +126,7 @@ if (!stopping) {
       HOST: host,
       SESSION_SECRET: process.env.SESSION_SECRET ?? persistentSecret('session'),
       WEB_DIST: webDist,
-      ...(fakeMail ? { SMTP_URL: fakeMail.smtpUrl, DEV_MAIL_URL: fakeMail.httpUrl } : {}),
+      ...fakeEnv,
       // With the fake mail server this is a local trial, not production: its mail page stays on.
       NODE_ENV: process.env.NODE_ENV ?? (fakeMail ? 'development' : 'production'),
     },
@@ -135,7 +157,10 @@ async function waitForHealth(url) {
 function printBanner(url, withFakeMail) {
   const lines = ['', `Peakwise is running at ${url}`, ''];
   if (withFakeMail) {
-    lines.push(`Mail sent by Peakwise (a local fake server; nothing leaves this machine): ${url}/dev/mail`, '');
+    lines.push(
+      `Mail and push notifications sent by Peakwise (local fake services; nothing leaves this machine): ${url}/dev/mail`,
+      '',
+    );
   }
   const accounts = readDemoAccounts(dataDir);
   if (accounts.length) {

@@ -16,6 +16,7 @@ import type { AppConfig } from './config.js';
 import { DatabaseModule } from './db/database.module.js';
 import type { DatabaseHandle } from './db/database.js';
 import { DevMailModule } from './dev/dev-mail.module.js';
+import { DevPushModule } from './dev/dev-push.module.js';
 import { FeedingModule } from './feeding/feeding.module.js';
 import { FormulaModule } from './formula/formula.module.js';
 import { HealthModule } from './health/health.module.js';
@@ -40,6 +41,7 @@ export class AppModule {
         PasswordResetModule,
         // Development only: config.ts leaves devMailUrl null in production.
         ...(config.mail.devMailUrl ? [DevMailModule] : []),
+        ...(config.push?.devServiceUrl ? [DevPushModule] : []),
         AdminModule,
         HealthModule,
         CultureModule,

@@ -30,6 +30,8 @@ export interface PushConfig {
   extraCa: string | null;
   /** Accept endpoints on loopback or private addresses: development and tests only, never production. */
   allowPrivateEndpoints: boolean;
+  /** The fake push service, listed at /api/dev/push (DEV_PUSH_URL); null (always in production) hides that route. */
+  devServiceUrl?: string | null;
 }
 
 export const DEFAULT_PUSH_CONFIG: PushConfig = {
@@ -83,6 +85,7 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): AppConfig {
       subject: env.PUSH_SUBJECT || 'mailto:no-reply@peakwise.invalid',
       extraCa: env.PUSH_CA_FILE ? readFileSync(env.PUSH_CA_FILE, 'utf8') : null,
       allowPrivateEndpoints: env.NODE_ENV !== 'production',
+      devServiceUrl: env.NODE_ENV === 'production' ? null : env.DEV_PUSH_URL || null,
     },
   };
 }

@@ -1,7 +1,9 @@
 import { createECDH, createPublicKey, randomBytes, randomUUID, verify, type ECDH } from 'node:crypto';
+import { existsSync, mkdirSync, readFileSync, renameSync, writeFileSync } from 'node:fs';
 import { createServer } from 'node:https';
 import type { IncomingMessage, ServerResponse } from 'node:http';
 import type { AddressInfo } from 'node:net';
+import { dirname } from 'node:path';
 import { decrypt } from 'http_ece';
 import { generate } from 'selfsigned';
 
@@ -24,6 +26,8 @@ export interface FakePushOptions {
   host?: string;
   /** Oldest messages are dropped beyond this count. */
   max?: number;
+  /** Keeps devices (their keys) and messages across restarts in this JSON file; null: memory only. */
+  file?: string | null;
 }
 
 export interface FakePushMessage {
@@ -67,8 +71,13 @@ const MAX_BODY_BYTES = 4096; // RFC 8030 §7.2: services must accept at least 40
 export async function startFakePush(options: FakePushOptions = {}): Promise<FakePush> {
   const host = options.host ?? '127.0.0.1';
   const max = options.max ?? 200;
-  const devices = new Map<string, Device>();
-  let stored: FakePushMessage[] = [];
+  const file = options.file ?? null;
+  const saved = file ? load(file) : { devices: [], messages: [] };
+  const devices = new Map<string, Device>(saved.devices.map((d) => [d.id, revive(d)]));
+  let stored: FakePushMessage[] = saved.messages;
+  const persist = (): void => {
+    if (file) save(file, { devices: [...devices].map(([id, d]) => freeze(id, d)), messages: stored });
+  };
   const pems = await generate([{ name: 'commonName', value: host }], {
     keyType: 'ec',
     algorithm: 'sha256',
@@ -91,6 +100,7 @@ export async function startFakePush(options: FakePushOptions = {}): Promise<Fake
     ecdh.generateKeys();
     const auth = randomBytes(16);
     devices.set(id, { ecdh, auth });
+    persist();
     return {
       endpoint: `${origin}/push/${id}`,
       expirationTime: null,
@@ -108,11 +118,13 @@ export async function startFakePush(options: FakePushOptions = {}): Promise<Fake
     const sub = /^\/subscriptions\/([0-9a-f-]{36})$/.exec(path);
     if (sub && req.method === 'DELETE') {
       devices.delete(sub[1]!);
+      persist();
       return void res.writeHead(204).end();
     }
     if (path === '/messages' && req.method === 'GET') return json(res, 200, { items: stored });
     if (path === '/messages' && req.method === 'DELETE') {
       stored = [];
+      persist();
       return void res.writeHead(204).end();
     }
     const push = /^\/push\/([0-9a-f-]{36})$/.exec(path);
@@ -161,6 +173,7 @@ export async function startFakePush(options: FakePushOptions = {}): Promise<Fake
       payload,
     };
     stored = [message, ...stored].slice(0, max);
+    persist();
     res.writeHead(201, { location: `${origin}/messages/${message.id}` }).end();
   }
 
@@ -177,14 +190,18 @@ export async function startFakePush(options: FakePushOptions = {}): Promise<Fake
     url: origin,
     certificate: pems.cert,
     newDevice,
-    removeDevice: (endpoint) => devices.delete(endpoint.split('/').pop() ?? ''),
+    removeDevice: (endpoint) => {
+      devices.delete(endpoint.split('/').pop() ?? '');
+      persist();
+    },
     messages: () => [...stored],
     clear: () => {
       stored = [];
+      persist();
     },
     close: async () => {
       server.closeAllConnections();
-      await new Promise<void>((resolve) => (server).close(() => resolve()));
+      await new Promise<void>((resolve) => server.close(() => resolve()));
     },
   };
 }
@@ -245,4 +262,45 @@ function readBody(req: IncomingMessage): Promise<Buffer | null> {
 function json(res: ServerResponse, status: number, body: unknown): void {
   res.writeHead(status, { 'content-type': 'application/json; charset=utf-8', 'cache-control': 'no-store' });
   res.end(JSON.stringify(body));
+}
+
+interface SavedDevice {
+  id: string;
+  /** The P-256 private key and the auth secret, base64url. */
+  privateKey: string;
+  auth: string;
+}
+
+interface Saved {
+  devices: SavedDevice[];
+  messages: FakePushMessage[];
+}
+
+function freeze(id: string, device: Device): SavedDevice {
+  return { id, privateKey: device.ecdh.getPrivateKey('base64url'), auth: device.auth.toString('base64url') };
+}
+
+function revive(saved: SavedDevice): Device {
+  const ecdh = createECDH('prime256v1');
+  ecdh.setPrivateKey(Buffer.from(saved.privateKey, 'base64url'));
+  return { ecdh, auth: Buffer.from(saved.auth, 'base64url') };
+}
+
+function load(file: string): Saved {
+  if (!existsSync(file)) return { devices: [], messages: [] };
+  try {
+    const parsed = JSON.parse(readFileSync(file, 'utf8')) as Partial<Saved>;
+    return { devices: parsed.devices ?? [], messages: parsed.messages ?? [] };
+  } catch {
+    // A half-written or hand-edited file is not worth refusing to start over: begin empty.
+    return { devices: [], messages: [] };
+  }
+}
+
+/** Write then rename, so a crash mid-write leaves the previous file. */
+function save(file: string, saved: Saved): void {
+  mkdirSync(dirname(file), { recursive: true });
+  const temporary = `${file}.${process.pid}.tmp`;
+  writeFileSync(temporary, JSON.stringify(saved, null, 1) + '\n', { mode: 0o600 });
+  renameSync(temporary, file);
 }

@@ -17,3 +17,23 @@ export interface DevMailListResponse {
   /** Newest first. */
   items: DevMailMessage[];
 }
+
+/** One notification the local fake push service received and decrypted (development only: GET /api/dev/push). */
+export interface DevPushMessage {
+  /** ISO 8601, UTC. */
+  receivedAt: string;
+  /** The device list's name for the receiving subscription, when it is still subscribed. */
+  device: string | null;
+  title: string;
+  body: string;
+  /** The page the notification opens. */
+  url: string;
+  /** RFC 8030 headers as sent. */
+  urgency: string | null;
+  ttl: number | null;
+}
+
+export interface DevPushListResponse {
+  /** Newest first. */
+  items: DevPushMessage[];
+}
