@@ -11,6 +11,7 @@ import { join } from 'node:path';
 import { ensureChromium, ensureNodeModules, ensurePostgres } from './lib/install.mjs';
 import { LocalCluster, clusterParent } from './lib/postgres.mjs';
 import { startFakeMail } from './lib/fake-mail.mjs';
+import { startFakePush } from './lib/fake-push.mjs';
 import { apiEntry, cliEntry, ensureDataDir, root, webDist } from './lib/project.mjs';
 import { log, runAsync } from './lib/run.mjs';
 
@@ -36,6 +37,7 @@ const results = [];
 let cluster = null;
 let server = null;
 let fakeMail = null;
+let fakePush = null;
 
 async function step(name, fn) {
   const started = Date.now();
@@ -104,7 +106,7 @@ async function startTestDatabase() {
   return cluster.url('peakwise_test');
 }
 
-function startServer(databaseUrl, port, mail) {
+function startServer(databaseUrl, port, mail, push) {
   return new Promise((resolve, reject) => {
     server = spawn('node', [apiEntry], {
       cwd: root,
@@ -121,6 +123,8 @@ function startServer(databaseUrl, port, mail) {
         AUTH_ATTEMPTS_PER_MINUTE: '1000',
         SMTP_URL: mail.smtpUrl,
         DEV_MAIL_URL: mail.httpUrl,
+        PUSH_CA_FILE: push.certFile,
+        DEV_PUSH_URL: push.url,
         NODE_ENV: 'test',
       },
     });
@@ -146,6 +150,7 @@ function cleanUp() {
     server.kill('SIGTERM');
   }
   if (fakeMail && fakeMail.child.exitCode === null) fakeMail.child.kill('SIGTERM');
+  if (fakePush && fakePush.child.exitCode === null) fakePush.child.kill('SIGTERM');
   cluster?.stop();
 }
 process.on('SIGINT', () => {
@@ -184,10 +189,16 @@ try {
     if (want.has('e2e') && built) {
       const port = Number(process.env.E2E_PORT ?? 3999);
       await step('e2e: browser (Chromium, playwright-core)', async () => {
-        // Its own ports, so a running `npm start` (2525/2526) is not disturbed; mail kept in memory only.
+        // Its own ports, so a running `npm start` (2525–2527) is not disturbed; mail and push in memory only.
         const smtpPort = Number(process.env.E2E_SMTP_PORT ?? 2535);
         fakeMail = await startFakeMail({ smtpPort, httpPort: smtpPort + 1, file: null, quiet: true });
-        await startServer(databaseUrl, port, fakeMail);
+        fakePush = await startFakePush({
+          port: smtpPort + 2,
+          certFile: join(root, '.data', 'fake-push-test-cert.pem'),
+          file: null,
+          quiet: true,
+        });
+        await startServer(databaseUrl, port, fakeMail, fakePush);
         return vitest('e2e', 'web', ['--config', 'vitest.e2e.config.ts'], { E2E_BASE_URL: `http://127.0.0.1:${port}` });
       });
     }
