@@ -1,4 +1,4 @@
-import { ConflictException, Injectable, NotFoundException } from '@nestjs/common';
+import { ConflictException, Injectable, NotFoundException, Optional } from '@nestjs/common';
 import type {
   Account,
   AccountListResponse,
@@ -7,6 +7,7 @@ import type {
   SignUpRequest,
   UpdateAccountRequest,
 } from '@peakwise/shared';
+import { AlertScheduler } from '../alert/alert.scheduler.js';
 import { PasswordService } from '../auth/password.service.js';
 import { passwordProblem } from '../auth/password-policy.js';
 import { fieldError } from '../common/validation.js';
@@ -18,6 +19,8 @@ export class AccountService {
   constructor(
     private readonly accounts: AccountRepository,
     private readonly passwords: PasswordService,
+    // Optional: the seed builds this service without Nest, before any alert exists.
+    @Optional() private readonly alerts?: AlertScheduler,
   ) {}
 
   async signUp(request: SignUpRequest, role: Role = 'baker'): Promise<AccountRecord> {
@@ -50,6 +53,8 @@ export class AccountService {
   async update(account: AccountRecord, changes: UpdateAccountRequest): Promise<Account> {
     const updated = await this.accounts.update(account.id, changes);
     if (!updated) throw new NotFoundException('This account no longer exists.');
+    // Alert words name local times, and quiet hours are local: both follow the new zone.
+    if (updated.timeZone !== account.timeZone) await this.alerts?.refreshAccount(account.id);
     return toAccount(updated);
   }
 

@@ -1,5 +1,13 @@
 import { Inject, Injectable } from '@nestjs/common';
-import type { AlertChannel, AlertKind, AlertPreferences, AlertSubjectType, WantedAlert } from '@peakwise/shared';
+import {
+  CULTURE_ALERT_KINDS,
+  PLAN_ALERT_KINDS,
+  type AlertChannel,
+  type AlertKind,
+  type AlertPreferences,
+  type AlertSubjectType,
+  type WantedAlert,
+} from '@peakwise/shared';
 import { sql, type Selectable } from 'kysely';
 import { DATABASE } from '../db/database.module.js';
 import type { Database } from '../db/database.js';
@@ -43,9 +51,10 @@ export class AlertRepository {
   /**
    * Insert the alert, or move / revive the stored one with the same slot key. Answers the id when
    * something changed (so deliveries and jobs follow), undefined when it stood as it was or was
-   * already sent (a sent alert is history and never moves).
+   * already sent (a sent alert is history and never moves). `replan` answers the id of a pending
+   * alert even when it stands as it was, for changes that move its deliveries only (preferences).
    */
-  async upsertWanted(accountId: string, wanted: WantedAlert): Promise<string | undefined> {
+  async upsertWanted(accountId: string, wanted: WantedAlert, replan = false): Promise<string | undefined> {
     const row = await this.db
       .insertInto('alert')
       .values({
@@ -82,6 +91,9 @@ export class AlertRepository {
               eb('alert.dueAt', '<>', eb.ref('excluded.dueAt')),
               eb('alert.staleAt', '<>', eb.ref('excluded.staleAt')),
               eb('alert.title', '<>', eb.ref('excluded.title')),
+              // Local times in the words change with the baker's time zone.
+              eb('alert.body', '<>', eb.ref('excluded.body')),
+              ...(replan ? [eb('alert.status', '=', 'pending')] : []),
             ]),
           ),
       )
@@ -137,7 +149,11 @@ export class AlertRepository {
     });
   }
 
-  /** Cancel pending alerts of a culture or plan whose slot is not in `keep`; their deliveries are dropped. */
+  /**
+   * Cancel pending alerts of a culture or plan whose slot is not in `keep`; their deliveries are
+   * dropped. Only kinds the rules produce for that subject: other alerts about it (a comment) are
+   * not the refresh's to cancel.
+   */
   async cancelPending(
     accountId: string,
     subject: { cultureId: string } | { planId: string },
@@ -149,6 +165,7 @@ export class AlertRepository {
         .set({ status: 'cancelled', cancelledAt: sql`now()`, updatedAt: sql`now()` })
         .where('accountId', '=', accountId)
         .where('status', '=', 'pending')
+        .where('kind', 'in', 'cultureId' in subject ? CULTURE_ALERT_KINDS : PLAN_ALERT_KINDS)
         .$if('cultureId' in subject, (q) => q.where('cultureId', '=', (subject as { cultureId: string }).cultureId))
         .$if('planId' in subject, (q) => q.where('planId', '=', (subject as { planId: string }).planId))
         .$if(keep.length > 0, (q) => q.where('slotKey', 'not in', keep))
@@ -287,6 +304,31 @@ export class AlertRepository {
   async feedingCulture(feedingId: string): Promise<string | undefined> {
     const row = await this.db.selectFrom('feeding').select('cultureId').where('id', '=', feedingId).executeTakeFirst();
     return row?.cultureId;
+  }
+
+  /** Read before the reading is deleted: its culture's alerts are refreshed after. */
+  async temperatureReadingCulture(readingId: string): Promise<string | undefined> {
+    const row = await this.db
+      .selectFrom('temperatureReading as t')
+      .innerJoin('feeding as f', 'f.id', 't.feedingId')
+      .select('f.cultureId')
+      .where('t.id', '=', readingId)
+      .executeTakeFirst();
+    return row?.cultureId;
+  }
+
+  /** Everything of an account that has alerts: its cultures and its active plans. */
+  async alertSubjects(accountId: string): Promise<{ cultureIds: string[]; planIds: string[] }> {
+    const [cultures, plans] = await Promise.all([
+      this.db.selectFrom('culture').select('id').where('accountId', '=', accountId).execute(),
+      this.db
+        .selectFrom('bakePlan')
+        .select('id')
+        .where('accountId', '=', accountId)
+        .where('status', '=', 'active')
+        .execute(),
+    ]);
+    return { cultureIds: cultures.map((c) => c.id), planIds: plans.map((p) => p.id) };
   }
 
   async cultureOwner(cultureId: string): Promise<string | undefined> {

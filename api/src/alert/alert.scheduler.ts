@@ -42,7 +42,29 @@ export class AlertScheduler {
     private readonly plans: BakePlanRepository,
   ) {}
 
-  async refreshCulture(cultureId: string): Promise<void> {
+  /**
+   * After a change that moves alerts without a logbook write: lead time, quiet hours, channels,
+   * time zone. Every culture and active plan is refreshed, and every pending alert's deliveries
+   * are planned again even where the alert itself stands (quiet hours move only the e-mail).
+   */
+  async refreshAccount(accountId: string): Promise<void> {
+    let subjects: { cultureIds: string[]; planIds: string[] };
+    try {
+      subjects = await this.alerts.alertSubjects(accountId);
+    } catch (error) {
+      this.logger.error(`Alert refresh of account ${accountId} failed: ${messageOf(error)}`);
+      return;
+    }
+    for (const id of subjects.cultureIds) await this.refreshCulture(id, true);
+    for (const id of subjects.planIds) await this.refreshPlan(id, true);
+  }
+
+  /** Before a temperature reading is deleted; refresh this culture once it is gone. */
+  readingCulture(readingId: string): Promise<string | undefined> {
+    return this.alerts.temperatureReadingCulture(readingId);
+  }
+
+  async refreshCulture(cultureId: string, replan = false): Promise<void> {
     await this.guard(`culture ${cultureId}`, async () => {
       const accountId = await this.alerts.cultureOwner(cultureId);
       if (!accountId) return;
@@ -59,7 +81,7 @@ export class AlertScheduler {
         now: now.toISOString(),
         timeZone,
       });
-      await this.sync(accountId, { cultureId }, wanted, prefs);
+      await this.sync(accountId, { cultureId }, wanted, prefs, replan);
     });
   }
 
@@ -69,7 +91,7 @@ export class AlertScheduler {
     if (cultureId) await this.refreshCulture(cultureId);
   }
 
-  async refreshPlan(planId: string): Promise<void> {
+  async refreshPlan(planId: string, replan = false): Promise<void> {
     await this.guard(`plan ${planId}`, async () => {
       const accountId = await this.alerts.planOwner(planId);
       if (!accountId) return;
@@ -83,7 +105,7 @@ export class AlertScheduler {
         plan: { id: row.id, name: row.name, status: row.status, steps },
         now: now.toISOString(),
       });
-      await this.sync(accountId, { planId }, wanted, await this.preferencesOf(accountId));
+      await this.sync(accountId, { planId }, wanted, await this.preferencesOf(accountId), replan);
     });
   }
 
@@ -96,11 +118,12 @@ export class AlertScheduler {
     subject: { cultureId: string } | { planId: string },
     wanted: WantedAlert[],
     prefs: AlertPreferences,
+    replan: boolean,
   ): Promise<void> {
     const recipient = await this.alerts.recipient(accountId);
     const timeZone = recipient?.timeZone ?? 'UTC';
     for (const alert of wanted) {
-      const alertId = await this.alerts.upsertWanted(accountId, alert);
+      const alertId = await this.alerts.upsertWanted(accountId, alert, replan);
       if (!alertId) continue;
       const plans: DeliveryPlan[] = channelsFor(prefs, alert.kind)
         .filter((c) => DELIVERED_CHANNELS.includes(c))
@@ -131,7 +154,11 @@ export class AlertScheduler {
     try {
       await work();
     } catch (error) {
-      this.logger.error(`Alert refresh of ${what} failed: ${error instanceof Error ? error.message : String(error)}`);
+      this.logger.error(`Alert refresh of ${what} failed: ${messageOf(error)}`);
     }
   }
+}
+
+function messageOf(error: unknown): string {
+  return error instanceof Error ? error.message : String(error);
 }

@@ -10,6 +10,7 @@ import {
 import type { AccountRecord } from '../account/account.repository.js';
 import { AlertListRepository } from './alert-list.repository.js';
 import { AlertRepository, type AlertRow } from './alert.repository.js';
+import { AlertScheduler } from './alert.scheduler.js';
 
 function toAlert(row: AlertRow): Alert {
   return {
@@ -32,6 +33,7 @@ export class AlertService {
   constructor(
     private readonly alerts: AlertRepository,
     private readonly page: AlertListRepository,
+    private readonly scheduler: AlertScheduler,
   ) {}
 
   async list(account: AccountRecord, page: { limit: number; offset: number }): Promise<AlertListResponse> {
@@ -58,10 +60,14 @@ export class AlertService {
     return (await this.alerts.preferences(account.id)) ?? defaultAlertPreferences();
   }
 
-  /** New preferences apply to alerts planned from now on and to every e-mail at its send time. */
+  /**
+   * New preferences apply at once: pending alerts move with the lead time, their deliveries with
+   * the quiet hours and channels (and the worker reads them again at send time).
+   */
   async updatePreferences(account: AccountRecord, patch: UpdateAlertPreferencesRequest): Promise<AlertPreferences> {
     const next = mergeAlertPreferences(await this.preferences(account), patch);
     await this.alerts.savePreferences(account.id, next);
+    await this.scheduler.refreshAccount(account.id);
     return next;
   }
 }

@@ -47,8 +47,10 @@ export class TemperatureService {
   }
 
   async delete(account: AccountRecord, id: string): Promise<void> {
+    const cultureId = await this.alerts.readingCulture(id);
     if (!(await this.readings.delete(account.id, id))) {
       throw new NotFoundException('No temperature reading with this id.');
     }
+    if (cultureId) await this.alerts.refreshCulture(cultureId);
   }
 }

@@ -1,5 +1,6 @@
 // Which alerts a culture wants, from its summary (the same prediction the Shelf shows). Pure: the
 // caller passes "now" and the baker's lead time.
+import type { AlertKind } from '../contracts/alert.js';
 import type { CultureSummary } from '../contracts/culture-summary.js';
 import type { CultureLocation } from '../contracts/culture.js';
 import { alertSlotKey } from './slot-key.js';
@@ -7,6 +8,16 @@ import type { WantedAlert } from './types.js';
 
 const MS_PER_MINUTE = 60_000;
 const MS_PER_HOUR = 3_600_000;
+
+/**
+ * Every kind cultureAlerts() produces. A refresh of a culture owns these and no others: an alert
+ * of another kind about the culture (a comment on one of its feedings) is never its to cancel.
+ */
+export const CULTURE_ALERT_KINDS = [
+  'feeding-due',
+  'culture-ready',
+  'past-peak',
+] as const satisfies readonly AlertKind[];
 
 /**
  * The feeding routine by location. Cultures carry no routine of their own yet, so it follows where

@@ -2,6 +2,7 @@ export { alertSlotKey } from './slot-key.js';
 export type { WantedAlert } from './types.js';
 export {
   cultureAlerts,
+  CULTURE_ALERT_KINDS,
   readyWindow,
   localTime,
   FEEDING_ROUTINE_HOURS,
@@ -10,6 +11,6 @@ export {
   READY_FALLBACK_STALE_HOURS,
   type CultureAlertInput,
 } from './culture-rules.js';
-export { planAlerts, PLAN_STEP_STALE_MINUTES, type PlanAlertInput } from './plan-rules.js';
+export { planAlerts, PLAN_ALERT_KINDS, PLAN_STEP_STALE_MINUTES, type PlanAlertInput } from './plan-rules.js';
 export { deliveryFor, isClockTime, type DeliveryDecision, type DeliveryInput } from './delivery-rules.js';
 export { channelsFor, defaultAlertPreferences, mergeAlertPreferences } from './preferences.js';

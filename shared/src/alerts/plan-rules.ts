@@ -1,10 +1,14 @@
 // Which step reminders a live bake plan wants. Pure: the caller passes the plan as re-planned now.
+import type { AlertKind } from '../contracts/alert.js';
 import type { BakePlanStatus } from '../contracts/bake-plan.js';
 import type { PlanStep, PlanStepKind } from '../fermentation/plan/types.js';
 import { alertSlotKey } from './slot-key.js';
 import type { WantedAlert } from './types.js';
 
 const MS_PER_MINUTE = 60_000;
+
+/** Every kind planAlerts() produces: all a plan's refresh may cancel (see CULTURE_ALERT_KINDS). */
+export const PLAN_ALERT_KINDS = ['plan-step'] as const satisfies readonly AlertKind[];
 
 /**
  * A step reminder an hour late is noise: the baker has moved on and the next step's reminder is
