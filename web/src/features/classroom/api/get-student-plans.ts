@@ -16,6 +16,6 @@ export const studentPlansQueryOptions = (classId: string, studentId: string, que
     queryFn: () => getStudentPlans(classId, studentId, query),
   });
 
-export function useStudentPlans(classId: string, studentId: string | null, query: PageQuery) {
-  return useQuery({ ...studentPlansQueryOptions(classId, studentId ?? '', query), enabled: studentId !== null });
+export function useStudentPlans(classId: string, studentId: string, query: PageQuery) {
+  return useQuery(studentPlansQueryOptions(classId, studentId, query));
 }

@@ -16,10 +16,20 @@ interface ForecastHeaderProps {
   lastFedAt: string | null;
   account: Account;
   now: Date;
+  /** Another's culture shown read-only (a class's instructor): no Log feeding or Rise check buttons. */
+  readOnly?: boolean;
 }
 
 /** State, countdown with its interval and the two big actions. */
-export function ForecastHeader({ cultureId, summary, summaryFailed, lastFedAt, account, now }: ForecastHeaderProps) {
+export function ForecastHeader({
+  cultureId,
+  summary,
+  summaryFailed,
+  lastFedAt,
+  account,
+  now,
+  readOnly = false,
+}: ForecastHeaderProps) {
   const words = summary ? forecastWords(summary, now) : null;
   const window = summary ? readyWindowOf(summary) : null;
   return (
@@ -48,9 +58,11 @@ export function ForecastHeader({ cultureId, summary, summaryFailed, lastFedAt, a
           {summaryFailed && lastFedAt && <Typography color="text.secondary">Prediction not available yet.</Typography>}
           {summary?.caution && <Alert severity="error">{summary.caution}</Alert>}
         </Stack>
-        <Stack direction="row" spacing={1} sx={{ mt: 2 }}>
-          <LogbookActions cultureId={cultureId} lastFedAt={lastFedAt} />
-        </Stack>
+        {!readOnly && (
+          <Stack direction="row" spacing={1} sx={{ mt: 2 }}>
+            <LogbookActions cultureId={cultureId} lastFedAt={lastFedAt} />
+          </Stack>
+        )}
       </CardContent>
     </Card>
   );

@@ -1,4 +1,4 @@
-import type { Account } from '@peakwise/shared';
+import type { Account, FeedingListQuery, FeedingListResponse, RiseCheckListResponse } from '@peakwise/shared';
 import Box from '@mui/material/Box';
 import Card from '@mui/material/Card';
 import CardContent from '@mui/material/CardContent';
@@ -13,23 +13,51 @@ import {
   ScatterPlot,
   type AllSeriesType,
 } from '@mui/x-charts';
-import { useQueries } from '@tanstack/react-query';
+import { useQueries, useQuery } from '@tanstack/react-query';
 import { useMemo } from 'react';
-import { useFeedings } from '@/lib/logbook/get-feedings';
-import { riseChecksQueryOptions } from '@/lib/logbook/get-rise-checks';
+import { getFeedings } from '@/lib/logbook/get-feedings';
+import { getRiseChecks, riseChecksQueryOptions } from '@/lib/logbook/get-rise-checks';
+import { logbookKeys } from '@/lib/logbook/query-keys';
 import { riseOverlay } from '../utils/rise-overlay';
 
 // Newest first: slate, amber, crust, a grey-teal; the newest reads strongest.
 const COLOURS = ['#2F4858', '#C9832E', '#8A5518', '#6F8F8A'];
 const FEEDINGS_SHOWN = 4;
 
+type Fetch<T> = { queryKey: readonly unknown[]; queryFn: () => Promise<T> };
+/** Where the feedings and rise checks come from when they are not the baker's own (a class's read-only routes). */
+export interface RiseOverlaySource {
+  feedings: (query: FeedingListQuery) => Fetch<FeedingListResponse>;
+  riseChecks: (feedingId: string) => Fetch<RiseCheckListResponse>;
+}
+
 /** The last few feedings' rises overlaid: rise checks as points, fitted curves as lines, peaks marked. */
-export function RiseOverlayCard({ cultureId, account }: { cultureId: string; account: Account }) {
-  const feedings = useFeedings(cultureId, { limit: FEEDINGS_SHOWN, order: 'desc' });
+export function RiseOverlayCard({
+  cultureId,
+  account,
+  source,
+}: {
+  cultureId: string;
+  account: Account;
+  source?: RiseOverlaySource;
+}) {
+  const query = { limit: FEEDINGS_SHOWN, order: 'desc' } as const;
+  const feedings = useQuery(
+    source?.feedings(query) ?? {
+      queryKey: logbookKeys.feedings(cultureId, { ...query }),
+      queryFn: () => getFeedings(cultureId, query),
+    },
+  );
   const items = useMemo(() => feedings.data?.items ?? [], [feedings.data]);
   // combine keeps one array per set of results, so the fits below rerun only when data changes.
   const checks = useQueries({
-    queries: items.map((f) => riseChecksQueryOptions(f.id)),
+    queries: items.map(
+      (f): Fetch<RiseCheckListResponse> =>
+        source?.riseChecks(f.id) ?? {
+          queryKey: riseChecksQueryOptions(f.id).queryKey,
+          queryFn: () => getRiseChecks(f.id),
+        },
+    ),
     combine: (results) => (results.every((r) => r.isSuccess) ? results.map((r) => r.data.items) : null),
   });
   const overlay = useMemo(
