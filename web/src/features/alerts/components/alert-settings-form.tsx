@@ -33,6 +33,7 @@ interface SettingsValues {
   'quietHours.from': string;
   'quietHours.until': string;
   email: Record<AlertKind, boolean>;
+  push: Record<AlertKind, boolean>;
 }
 
 function valuesOf(prefs: AlertPreferences): SettingsValues {
@@ -42,12 +43,13 @@ function valuesOf(prefs: AlertPreferences): SettingsValues {
     'quietHours.from': prefs.quietHours?.from ?? '22:00',
     'quietHours.until': prefs.quietHours?.until ?? '07:00',
     email: Object.fromEntries(ALERT_KINDS.map((k) => [k, prefs.channels[k].email])) as Record<AlertKind, boolean>,
+    push: Object.fromEntries(ALERT_KINDS.map((k) => [k, prefs.channels[k].push])) as Record<AlertKind, boolean>,
   };
 }
 
 const FIELDS = ['leadMinutes', 'quietHours.from', 'quietHours.until'] as const;
 
-/** Lead time, quiet hours and e-mail per alert kind; in the app is always on, push is not built yet. */
+/** Lead time, quiet hours, and e-mail and push per alert kind; in the app is always on. */
 export function AlertSettingsForm({ prefs, timeZone }: { prefs: AlertPreferences; timeZone: string }) {
   const update = useUpdateAlertPreferences();
   const [saved, setSaved] = useState(false);
@@ -60,7 +62,7 @@ export function AlertSettingsForm({ prefs, timeZone }: { prefs: AlertPreferences
     const body: UpdateAlertPreferencesRequest = {
       leadMinutes: Number(values.leadMinutes),
       quietHours: values.quiet ? { from: values['quietHours.from'], until: values['quietHours.until'] } : null,
-      channels: Object.fromEntries(ALERT_KINDS.map((k) => [k, { email: values.email[k] }])),
+      channels: Object.fromEntries(ALERT_KINDS.map((k) => [k, { email: values.email[k], push: values.push[k] }])),
     };
     try {
       reset(valuesOf(await update.mutateAsync(body)));
@@ -87,8 +89,8 @@ export function AlertSettingsForm({ prefs, timeZone }: { prefs: AlertPreferences
           Quiet hours
         </Typography>
         <Typography variant="body2" color="text.secondary" sx={{ mb: 1 }}>
-          No e-mail inside them ({timeZone}): it waits until they end, or is dropped if it is stale by then. Alerts in
-          the app still arrive.
+          No e-mail or push notification inside them ({timeZone}): they wait until the quiet hours end, or are dropped
+          if stale by then. Alerts in the app still arrive.
         </Typography>
         <Controller
           control={control}
@@ -113,7 +115,7 @@ export function AlertSettingsForm({ prefs, timeZone }: { prefs: AlertPreferences
           Channels
         </Typography>
         <Typography variant="body2" color="text.secondary" sx={{ mb: 1 }}>
-          Every alert shows in the app. Push notifications are coming soon.
+          Every alert shows in the app. Push goes to the devices you turned on above.
         </Typography>
         <Stack spacing={1.5}>
           {ALERT_KINDS.map((kind) => (
@@ -124,19 +126,25 @@ export function AlertSettingsForm({ prefs, timeZone }: { prefs: AlertPreferences
               </Typography>
               <Stack direction="row" sx={{ flexWrap: 'wrap', columnGap: 1 }}>
                 <FormControlLabel control={<Switch checked disabled size="small" />} label="In the app" />
-                <Controller
-                  control={control}
-                  name={`email.${kind}`}
-                  render={({ field }) => (
-                    <FormControlLabel
-                      control={
-                        <Switch size="small" checked={field.value} onChange={(e) => field.onChange(e.target.checked)} />
-                      }
-                      label="E-mail"
-                    />
-                  )}
-                />
-                <FormControlLabel control={<Switch size="small" disabled />} label="Push (coming soon)" />
+                {(['email', 'push'] as const).map((channel) => (
+                  <Controller
+                    key={channel}
+                    control={control}
+                    name={`${channel}.${kind}`}
+                    render={({ field }) => (
+                      <FormControlLabel
+                        control={
+                          <Switch
+                            size="small"
+                            checked={field.value}
+                            onChange={(e) => field.onChange(e.target.checked)}
+                          />
+                        }
+                        label={channel === 'email' ? 'E-mail' : 'Push'}
+                      />
+                    )}
+                  />
+                ))}
               </Stack>
             </Box>
           ))}

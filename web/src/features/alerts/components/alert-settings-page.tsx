@@ -6,12 +6,14 @@ import { Page } from '@/components/layout/page';
 import { useSignedInAccount } from '@/lib/auth/use-signed-in-account';
 import { useAlertPreferences } from '../api/alert-preferences';
 import { AlertSettingsForm } from './alert-settings-form';
+import { PushDevicesCard } from './push-devices-card';
 
 export function AlertSettingsPage() {
   const account = useSignedInAccount();
   const prefs = useAlertPreferences();
   return (
     <Page title="Alert settings" intro="When reminders come and where they reach you.">
+      <PushDevicesCard />
       <Card component="section" aria-label="Alert settings">
         <CardContent>
           {prefs.isPending ? (
