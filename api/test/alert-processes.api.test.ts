@@ -136,10 +136,14 @@ describe('two API processes sharing one database', () => {
     expect(rows).toHaveLength(2 * ALERTS);
     expect(rows.every((r) => r.attempts >= 1 && r.droppedAt === null)).toBe(true);
     const attempts = rows.reduce((sum, r) => sum + r.attempts, 0);
+    // Each process links to itself (PUBLIC_URL defaults to its own address): both took part.
+    const bySender = processes.map((p) => received.filter((m) => m.text.includes(`${p.url}/`)).length);
+    expect(bySender.every((n) => n > 0)).toBe(true);
+    expect(bySender[0]! + bySender[1]!).toBe(ALERTS);
     console.log(
       `two processes: ${ALERTS} alerts, ${deliveries.length} deliveries, ${2 * deliveries.length} jobs; ` +
-        `in-app sent ${sentInApp.n}, e-mails received ${received.length}, duplicates ${duplicates}, ` +
-        `missing ${missing}, claims ${attempts}; ${seconds.toFixed(1)} s`,
+        `in-app sent ${sentInApp.n}, e-mails received ${received.length} (${bySender.join(' + ')} by process), ` +
+        `duplicates ${duplicates}, missing ${missing}, claims ${attempts}; ${seconds.toFixed(1)} s`,
     );
   }, 240_000);
 

@@ -80,6 +80,7 @@ function freePort(): Promise<number> {
 /** `node api/dist/src/main.js` as `npm start` runs it, on a free loopback port, up once /api/health answers. */
 export async function startApi(options: ApiProcessOptions): Promise<ApiProcess> {
   const port = await freePort();
+  const url = `http://127.0.0.1:${port}`;
   const child = spawn('node', [API_ENTRY], {
     cwd: repoRoot(),
     stdio: ['ignore', 'pipe', 'pipe'],
@@ -88,6 +89,8 @@ export async function startApi(options: ApiProcessOptions): Promise<ApiProcess> 
       DATABASE_URL: options.databaseUrl,
       HOST: '127.0.0.1',
       PORT: String(port),
+      // Links in its e-mails name the process that sent them.
+      PUBLIC_URL: url,
       SESSION_SECRET: 'test-only-secret-test-only-secret-0123456789',
       NODE_ENV: 'test',
       LOG_LEVEL: 'warn',
@@ -106,7 +109,6 @@ export async function startApi(options: ApiProcessOptions): Promise<ApiProcess> 
   };
   child.stdout.on('data', keep);
   child.stderr.on('data', keep);
-  const url = `http://127.0.0.1:${port}`;
   const until = Date.now() + 30_000;
   for (;;) {
     if (child.exitCode !== null) throw new Error(`the API exited early (${child.exitCode}):\n${output}`);
