@@ -100,7 +100,7 @@ describe('forgot password', () => {
     await resetLinkFor(page, base, email);
 
     await page.goto(`${base}/dev/mail`);
-    await page.getByRole('heading', { name: 'Mail sent by Peakwise in development' }).waitFor();
+    await page.getByRole('heading', { name: 'Mail and push sent by Peakwise in development' }).waitFor();
     await page.getByRole('list', { name: 'Messages' }).getByText(email).first().click();
     const frame = page.locator('iframe');
     await expect(frame.getAttribute('sandbox')).resolves.toBe('');

@@ -13,6 +13,7 @@ import { PageLoader } from '@/components/feedback/page-loader';
 import { isApiError } from '@/lib/api-client';
 import { useDevMail } from '../api/dev-mail';
 import { MailView } from './mail-view';
+import { PushList } from './push-list';
 
 const keyOf = (m: DevMailMessage) => `${m.date}|${m.messageId ?? m.subject}`;
 
@@ -25,13 +26,15 @@ export function DevMailPage() {
 
   return (
     <Box component="main" sx={{ maxWidth: 1200, mx: 'auto', px: 2, py: { xs: 2, sm: 4 }, display: 'grid', gap: 2 }}>
-      <title>Development mail · Peakwise</title>
+      <title>Development mail and push · Peakwise</title>
       <Box>
-        <Typography variant="h1">Mail sent by Peakwise in development</Typography>
+        <Typography variant="h1">Mail and push sent by Peakwise in development</Typography>
         <Typography color="text.secondary">
-          Caught by the local fake mail server; nothing here was delivered to anyone. Newest first.
+          Caught by the local fake mail server and push service; nothing here was delivered to anyone. Newest first.
         </Typography>
       </Box>
+      <PushList />
+      <Typography variant="h2">Mail</Typography>
       {mail.isPending && <PageLoader />}
       {mail.isError && (
         <Alert severity="warning">
