@@ -1,5 +1,6 @@
 import Logout from '@mui/icons-material/Logout';
 import PersonOutlined from '@mui/icons-material/PersonOutlined';
+import SchoolOutlined from '@mui/icons-material/SchoolOutlined';
 import Avatar from '@mui/material/Avatar';
 import Box from '@mui/material/Box';
 import Button from '@mui/material/Button';
@@ -90,6 +91,12 @@ export function AccountMenu() {
             <PersonOutlined fontSize="small" />
           </ListItemIcon>
           Account settings
+        </MenuItem>
+        <MenuItem component={RouterLink} to="/classes" onClick={close}>
+          <ListItemIcon>
+            <SchoolOutlined fontSize="small" />
+          </ListItemIcon>
+          Classroom
         </MenuItem>
         <MenuItem onClick={onSignOut} disabled={signOut.isPending}>
           <ListItemIcon>

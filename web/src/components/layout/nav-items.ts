@@ -4,6 +4,7 @@ import HomeOutlined from '@mui/icons-material/HomeOutlined';
 import KitchenOutlined from '@mui/icons-material/KitchenOutlined';
 import PersonOutlined from '@mui/icons-material/PersonOutlined';
 import ScaleOutlined from '@mui/icons-material/ScaleOutlined';
+import SchoolOutlined from '@mui/icons-material/SchoolOutlined';
 import type SvgIcon from '@mui/material/SvgIcon';
 import type { NavTarget } from './nav-match';
 
@@ -23,8 +24,10 @@ export const NAV_ITEMS: readonly NavItem[] = [
   { label: 'Bench', to: '/bench', icon: BakeryDiningOutlined },
   { label: 'Formula', to: '/formulas', icon: ScaleOutlined },
   { label: 'Home', to: '/', icon: HomeOutlined },
-  // Admins reach their account from the top bar's menu, which keeps their bar at five entries.
-  { label: 'Account', to: '/account', icon: PersonOutlined, roles: ['baker', 'instructor'] },
+  // Admins and instructors reach their account from the top bar's menu, which keeps their bar at
+  // five entries; an instructor's fifth is the Classroom they teach in (students find it in the menu).
+  { label: 'Account', to: '/account', icon: PersonOutlined, roles: ['baker'] },
+  { label: 'Classroom', to: '/classes', icon: SchoolOutlined, roles: ['instructor'] },
   {
     label: 'Admin',
     to: '/admin/accounts',

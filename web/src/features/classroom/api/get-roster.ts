@@ -22,5 +22,9 @@ export function useRoster(classId: string, query: RosterQuery) {
   return useQuery(rosterQueryOptions(classId, query));
 }
 
-/** GET /api/classes/:classId/roster.csv: a plain download link, the session cookie goes along. */
-export const rosterCsvUrl = (classId: string) => `/api${classPath(classId)}/roster.csv`;
+/**
+ * GET /api/classes/:classId/roster.csv (every row, in the table's filter and order): a plain
+ * download link, the session cookie goes along.
+ */
+export const rosterCsvUrl = (classId: string, query: Omit<RosterQuery, 'limit' | 'offset'>) =>
+  `/api${classPath(classId)}/roster.csv${searchOf(query)}`;

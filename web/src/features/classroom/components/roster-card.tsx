@@ -78,7 +78,13 @@ export function RosterCard({ classId, account, now }: { classId: string; account
             sx={{ alignItems: 'center', justifyContent: 'space-between', flexWrap: 'wrap', gap: 1 }}
           >
             <Typography variant="h2">Roster</Typography>
-            <Button startIcon={<Download />} href={rosterCsvUrl(classId)} download variant="outlined" size="small">
+            <Button
+              startIcon={<Download />}
+              href={rosterCsvUrl(classId, { sort, order, flag: flag ?? undefined, q: q || undefined })}
+              download
+              variant="outlined"
+              size="small"
+            >
               Download roster (CSV)
             </Button>
           </Stack>
