@@ -9,9 +9,9 @@ export function rosterCsvColumns(unit: TemperatureUnit): string[] {
   return [
     'Student',
     'Culture',
-    'Last fed (UTC, ISO 8601)',
+    'Last fed (UTC ISO 8601)',
     'Since fed (h)',
-    `Time to peak, 1:1:1 at ${REFERENCE[unit]} (h)`,
+    `Time to peak at 1:1:1 and ${REFERENCE[unit]} (h)`,
     'Rise multiple (× starting height)',
     'Trend',
     'Flags',

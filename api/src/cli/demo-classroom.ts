@@ -18,9 +18,10 @@ export const DEMO_CLASS = {
 /** The struggling culture, and its newest feedings made slower (× time to peak) and weaker (× rise). */
 export const STRUGGLING_CULTURE = 'Pip';
 const STRUGGLE: { slower: number; rise: number }[] = [
-  { slower: 1.9, rise: 0.45 },
-  { slower: 1.6, rise: 0.55 },
-  { slower: 1.4, rise: 0.65 },
+  { slower: 2.0, rise: 0.45 },
+  { slower: 1.4, rise: 0.55 },
+  { slower: 1.3, rise: 0.65 },
+  { slower: 1.15, rise: 0.8 },
 ];
 
 const DAY = 86_400_000;
