@@ -1,6 +1,7 @@
-// Previews sit under the classroom's root key, so joining (which invalidates 'classes') refreshes
-// the "already a member" flag along with every class list.
+// An invitation's preview stays apart from the classroom's root key: joining invalidates
+// 'classes', and asking about a link that joining just spent would answer 410 under the notice.
+// The code preview sits under 'classes', so its "already a member" flag follows a join.
 export const classJoinKeys = {
-  invite: (token: string) => ['classes', 'join-preview', 'invite', token] as const,
+  invite: (token: string) => ['class-invite', token] as const,
   code: (code: string) => ['classes', 'join-preview', 'code', code] as const,
 };

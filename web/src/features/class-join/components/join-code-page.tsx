@@ -67,7 +67,11 @@ export function JoinCodePage({ initialCode }: { initialCode: string }) {
               label="Join code"
               autoComplete="off"
               slotProps={{
-                htmlInput: { autoCapitalize: 'characters', spellCheck: false, style: { letterSpacing: '0.15em' } },
+                htmlInput: {
+                  autoCapitalize: 'characters',
+                  spellCheck: false,
+                  style: { letterSpacing: '0.15em', textTransform: 'uppercase' },
+                },
               }}
               helperText="Capitals or not, spaces and dashes are fine."
               rules={{ validate: (v) => joinCodeProblem(v) ?? true }}
