@@ -130,6 +130,24 @@ describe('roster of a small class', () => {
     expect(after.items[0]).toMatchObject({ studentName: 'Sam Field', cultureId: null, flags: ['no-culture'] });
   });
 
+  it('flags a culture fed more than a day ago on the counter, with no rise checks since', async () => {
+    await addMember(t.db, classId, stranger.account.id);
+    const fedAt = new Date(Date.now() - 30 * 3_600_000).toISOString();
+    await created(
+      send(t.app, 'POST', `/api/cultures/${ids.strangerCulture}/feedings`, stranger.cookie, {
+        fedAt,
+        starterG: 20,
+        flourG: 40,
+        waterG: 40,
+      }),
+    );
+    const rows = (await get(ines, 'roster?sort=flags')).json<RosterResponse>().items;
+    expect(rows[0]).toMatchObject({ studentName: 'Sam Field', lastFedAt: fedAt, flags: ['overdue', 'no-rise-checks'] });
+    expect(rows[0]?.hoursSinceFed).toBeGreaterThan(30);
+    // Theo fed his two days and three days ago: overdue too, but his feedings have rise checks.
+    expect(rows[1]).toMatchObject({ studentName: 'Theo Park', flags: ['overdue'] });
+  });
+
   it('escapes a culture name that a spreadsheet would run as a formula in the CSV', async () => {
     await send(t.app, 'PATCH', `/api/cultures/${ids.culture}`, theo.cookie, { name: '=HYPERLINK("x")' });
     const res = await get(ines, 'roster.csv');
