@@ -17,8 +17,9 @@ export const TREND_BASELINE_FEEDINGS = 5;
 export const TREND_MIN_BASELINE_FEEDINGS = 2;
 /**
  * "slower" when the recent normalised time to peak is at least 25 % above the baseline ("faster"
- * when at least 25 % below). Common practice, not a published threshold: day-to-day spread of a
- * healthy culture is around ±20 %, so a quarter on a three-feeding mean is more than noise.
+ * when at least 25 % below). Common practice, not a published threshold: the model assumes a
+ * day-to-day spread of about ±20 % per feeding (PRIOR_RESIDUAL_SD, itself from memory), so a
+ * quarter on the mean of three against the mean of up to five is more than noise.
  */
 export const SLOWER_BY = 0.25;
 /**
