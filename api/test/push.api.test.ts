@@ -180,20 +180,39 @@ describe('a feeding whose ready window starts now', () => {
     expect(pushService.messages()).toHaveLength(0);
   });
 
-  it('push switched off for the kind, or no device: nothing is pushed and the delivery is dropped', async () => {
-    await feedSoon(); // no device registered
-    const dropped = await until(
-      () =>
-        t.db
-          .selectFrom('alertDelivery as d')
-          .innerJoin('alert as a', 'a.id', 'd.alertId')
-          .selectAll('d')
-          .where('d.channel', '=', 'push')
-          .where('a.kind', '=', 'culture-ready')
-          .execute(),
-      (rows) => rows.length === 1 && rows[0]!.droppedAt !== null,
+  it('without a device no push is planned; turning one on plans it for the alert already pending', async () => {
+    await feedSoon(); // no device yet
+    await until(
+      async () => (await ok<AlertListResponse>(call('GET', '/api/alerts'))).items,
+      (items: Alert[]) => items.length >= 1,
     );
-    expect(dropped[0]?.droppedAt, JSON.stringify(dropped)).not.toBeNull();
+    const pushRows = () =>
+      t.db
+        .selectFrom('alertDelivery as d')
+        .innerJoin('alert as a', 'a.id', 'd.alertId')
+        .select(['a.kind', 'd.sentAt', 'd.droppedAt'])
+        .where('d.channel', '=', 'push')
+        .execute();
+    expect(await pushRows()).toEqual([]);
+
+    // The feeding-due alert still lies ahead: a device turned on now gets it planned.
+    await registerDevice();
+    const planned = await pushRows();
+    expect(planned.map((r) => r.kind)).toContain('feeding-due');
+    expect(planned.every((r) => r.sentAt === null && r.droppedAt === null)).toBe(true);
+  });
+
+  it('push switched off for the kind: nothing is pushed, the app and e-mail still go', async () => {
+    await registerDevice();
+    await ok(call('PATCH', '/api/account/alert-preferences', { channels: { 'culture-ready': { push: false } } }));
+    await feedSoon();
+    expect(
+      await until(
+        () => mailbox.messages(),
+        (m) => m.length >= 1,
+      ),
+    ).toHaveLength(1);
+    await new Promise((r) => setTimeout(r, 1000));
     expect(pushService.messages()).toHaveLength(0);
   });
 });

@@ -83,8 +83,9 @@ export class AlertNotifier {
 
     const prefs = (await this.alerts.preferences(alert.accountId)) ?? defaultAlertPreferences();
     const timeZone = (await this.alerts.recipient(alert.accountId))?.timeZone ?? 'UTC';
+    const pushOn = await this.alerts.hasPushDevice(alert.accountId);
     const plans: DeliveryPlan[] = channelsFor(prefs, alert.kind)
-      .filter((c) => DELIVERED_CHANNELS.includes(c))
+      .filter((c) => DELIVERED_CHANNELS.includes(c) && (c !== 'push' || pushOn))
       .map((channel) => {
         const d = deliveryFor({
           channel,

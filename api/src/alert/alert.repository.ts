@@ -256,6 +256,17 @@ export class AlertRepository {
       .execute();
   }
 
+  /** The account has at least one browser subscribed to push. */
+  async hasPushDevice(accountId: string): Promise<boolean> {
+    const row = await this.db
+      .selectFrom('pushSubscription')
+      .select('id')
+      .where('accountId', '=', accountId)
+      .limit(1)
+      .executeTakeFirst();
+    return row !== undefined;
+  }
+
   recipient(accountId: string): Promise<AlertRecipient | undefined> {
     return this.db
       .selectFrom('account')

@@ -120,13 +120,18 @@ export class AlertScheduler {
     prefs: AlertPreferences,
     replan: boolean,
   ): Promise<void> {
-    const recipient = await this.alerts.recipient(accountId);
+    const [recipient, pushOn] = await Promise.all([
+      this.alerts.recipient(accountId),
+      this.alerts.hasPushDevice(accountId),
+    ]);
     const timeZone = recipient?.timeZone ?? 'UTC';
+    // No device, no push delivery; turning one on re-plans the account (PushService).
+    const channels = DELIVERED_CHANNELS.filter((c) => c !== 'push' || pushOn);
     for (const alert of wanted) {
       const alertId = await this.alerts.upsertWanted(accountId, alert, replan);
       if (!alertId) continue;
       const plans: DeliveryPlan[] = channelsFor(prefs, alert.kind)
-        .filter((c) => DELIVERED_CHANNELS.includes(c))
+        .filter((c) => channels.includes(c))
         .map((channel) => {
           const d = deliveryFor({
             channel,

@@ -1,6 +1,7 @@
 import { Inject, Injectable, NotFoundException } from '@nestjs/common';
 import type { PushDevice, PushDeviceListResponse, PushPublicKey, PushTestResponse } from '@peakwise/shared';
 import type { AccountRecord } from '../account/account.repository.js';
+import { AlertScheduler } from '../alert/alert.scheduler.js';
 import { fieldError } from '../common/validation.js';
 import { APP_CONFIG, DEFAULT_PUSH_CONFIG, type AppConfig } from '../config.js';
 import type { CreatePushSubscriptionDto } from './dto/push.dto.js';
@@ -54,6 +55,7 @@ export class PushService {
     private readonly keys: PushKeys,
     private readonly repo: PushRepository,
     private readonly sender: PushSender,
+    private readonly alerts: AlertScheduler,
     @Inject(APP_CONFIG) config: AppConfig,
   ) {
     this.allowPrivate = (config.push ?? DEFAULT_PUSH_CONFIG).allowPrivateEndpoints;
@@ -72,6 +74,8 @@ export class PushService {
       auth: body.keys.auth,
       label: body.label?.trim() || deviceLabel(userAgent),
     });
+    // Pending alerts were planned without push while there was no device: plan them again.
+    await this.alerts.refreshAccount(account.id);
     return toDevice(row);
   }
 
