@@ -6,6 +6,17 @@ import { afterEach, beforeEach, describe, expect, it } from 'vitest';
 import { baseUrl, DESKTOP, launchBrowser, PHONE, RESULTS_DIR, uniqueEmail, type Browser } from './browser';
 import { createCulture, createFeeding, HOUR, PASSWORD, post, signUp } from './helpers';
 
+// A bake for the instructor to look at: 75 % water, 20 % levain, 2 % salt (baker's percentages).
+const COUNTRY_LOAF = {
+  name: 'Country loaf 75 %',
+  ingredients: [
+    { kind: 'flour', name: 'Bread flour', amount: 1000, unit: 'g' },
+    { kind: 'water', name: 'Water', amount: 750, unit: 'g' },
+    { kind: 'starter', name: 'Levain', amount: 200, unit: 'g' },
+    { kind: 'salt', name: 'Salt', amount: 20, unit: 'g' },
+  ],
+};
+
 /**
  * Gives an account the instructor role straight in the database: an admin would do it on the
  * admin page, but a fresh test database has no admin. Needs the DATABASE_URL the harness uses.
@@ -95,6 +106,15 @@ describe('joining a class and its comments', () => {
     const link = await inviteLinkFor(t, base, studentEmail);
     expect(new URL(link).origin).toBe(new URL(base).origin);
 
+    // Another account (the instructor's own) is told whose link it is and offered a way out.
+    await t.goto(link);
+    await t
+      .getByRole('alert')
+      .filter({ hasText: `You are signed in as ${teacherEmail}` })
+      .waitFor();
+    await t.getByRole('button', { name: 'Sign out and use the invited address' }).waitFor();
+    await t.screenshot({ path: join(RESULTS_DIR, 'class-invite-other-account-desktop.png') });
+
     // Signed out, the link goes by sign-in and comes back.
     await s.goto(link);
     await s.waitForURL(/\/sign-in\?next=%2Finvites%2F/);
@@ -159,6 +179,31 @@ describe('joining a class and its comments', () => {
       .getByRole('button', { name: 'Delete comment' })
       .click();
     await thread.getByText('Top of the fridge').waitFor({ state: 'detached' });
+
+    // A bake, read-only for the instructor, with its own thread.
+    const formula = await post(s, `${base}/api/formulas`, COUNTRY_LOAF);
+    const plan = await post(s, `${base}/api/plans`, {
+      formulaId: formula.id,
+      cultureId,
+      mode: 'start-now',
+      doughTemperatureC: 24,
+      option: 'same-day',
+    });
+    await t.goto(`${base}/classes/${cls.id}/plans/${plan.id}`);
+    await t.getByText('Read-only: shared with you as this class’s instructor.').waitFor();
+    await t.getByRole('list', { name: 'Steps' }).waitFor();
+    expect(await t.getByRole('button', { name: /^(Done|Undo|Log reading now)/ }).count()).toBe(0);
+    await t.getByLabel('Comment for your student').fill('Check the dough at the second fold.');
+    await t.getByRole('button', { name: 'Post comment' }).click();
+    await t.getByTestId('comment').filter({ hasText: 'second fold' }).waitFor();
+    await t.screenshot({ path: join(RESULTS_DIR, 'class-plan-desktop.png'), fullPage: true });
+    await t.setViewportSize(PHONE);
+    await t.screenshot({ path: join(RESULTS_DIR, 'class-plan-phone.png'), fullPage: true });
+    await s.goto(`${base}/bench/${plan.id}`);
+    const bakeThread = s.getByRole('region', { name: 'Comments from your class' });
+    await bakeThread.getByTestId('comment').filter({ hasText: 'second fold' }).getByText('Instructor').waitFor();
+    await bakeThread.scrollIntoViewIfNeeded();
+    await s.screenshot({ path: join(RESULTS_DIR, 'bench-comments-phone.png') });
 
     await s.goto(`${base}/alerts`);
     await s

@@ -30,7 +30,9 @@ function intro(plan: BakePlanView, clock: ClockOptions, now: Date): string {
   const parts = [STATUS[plan.status]];
   if (plan.formulaName && !plan.name.includes(plan.formulaName)) parts.push(plan.formulaName);
   parts.push(plan.cultureName ? `leavened by ${plan.cultureName}` : 'no culture (typical times)');
-  if (plan.status === 'active' && plan.live.readyAt) parts.push(`ready ${formatWhen(plan.live.readyAt, now, clock)}`);
+  // The default name says the ready time already.
+  if (plan.status === 'active' && plan.live.readyAt && !/ready/i.test(plan.name))
+    parts.push(`ready ${formatWhen(plan.live.readyAt, now, clock)}`);
   if (plan.status === 'finished' && plan.finishedAt) parts.push(`baked ${formatWhen(plan.finishedAt, now, clock)}`);
   return parts.join(' · ');
 }
