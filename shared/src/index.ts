@@ -21,6 +21,7 @@ export * from './contracts/bake-plan.js';
 export * from './contracts/alert.js';
 export * from './contracts/classroom.js';
 export * from './contracts/push.js';
+export * from './contracts/photo.js';
 export * from './alerts/index.js';
 export * from './classroom/index.js';
 export * from './contracts/password-reset.js';
