@@ -13,8 +13,13 @@ export function FlagChip({ flag }: { flag: RosterFlag }) {
         label={words.label}
         color={words.color}
         variant={words.color === 'default' ? 'outlined' : 'filled'}
-        // Focusable, so a keyboard can reach the tooltip too.
+        // Focusable, so a keyboard can reach the tooltip too; a tap shows the tooltip rather than
+        // opening the row or the entry the chip sits in.
         tabIndex={0}
+        onClick={(event) => {
+          event.preventDefault();
+          event.stopPropagation();
+        }}
         sx={{ fontWeight: 500 }}
       />
     </Tooltip>

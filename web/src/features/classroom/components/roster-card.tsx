@@ -9,12 +9,16 @@ import InputAdornment from '@mui/material/InputAdornment';
 import LinearProgress from '@mui/material/LinearProgress';
 import Stack from '@mui/material/Stack';
 import TablePagination from '@mui/material/TablePagination';
+import MenuItem from '@mui/material/MenuItem';
 import TextField from '@mui/material/TextField';
 import Typography from '@mui/material/Typography';
+import { useTheme } from '@mui/material/styles';
+import useMediaQuery from '@mui/material/useMediaQuery';
 import { useEffect, useState } from 'react';
 import { LoadError } from '@/components/feedback/load-error';
 import { rosterCsvUrl, useRoster } from '../api/get-roster';
 import { FLAG_WORDS } from '../utils/roster-words';
+import { RosterList } from './roster-list';
 import { RosterSummary } from './roster-summary';
 import { RosterTable } from './roster-table';
 
@@ -27,6 +31,16 @@ const FIRST_ORDER: Record<RosterSort, SortOrder> = {
   riseMultiple: 'asc',
   flags: 'desc',
   sluggish: 'desc',
+};
+
+/** The phone's sort menu: each column in the direction that brings trouble to the top. */
+const SORT_WORDS: Record<RosterSort, string> = {
+  sluggish: 'Sluggish first',
+  flags: 'Most flags first',
+  lastFed: 'Longest since feeding',
+  hoursToPeak: 'Slowest to peak',
+  riseMultiple: 'Weakest rise',
+  student: 'Student name',
 };
 
 /** The search box's text once typing has paused, so each keystroke is not a request. */
@@ -49,6 +63,9 @@ export function RosterCard({ classId, account, now }: { classId: string; account
   const [page, setPage] = useState(0);
   const [rowsPerPage, setRowsPerPage] = useState(25);
   const q = useSettled(search.trim());
+  const theme = useTheme();
+  // Six columns need a wide screen; a phone gets one entry per culture instead.
+  const wide = useMediaQuery(theme.breakpoints.up('md'), { noSsr: true });
   const roster = useRoster(classId, {
     sort,
     order,
@@ -90,13 +107,35 @@ export function RosterCard({ classId, account, now }: { classId: string; account
           </Stack>
           {everyone.data && <RosterSummary classId={classId} rows={everyone.data.items} />}
           <Stack direction="row" sx={{ flexWrap: 'wrap', gap: 1, alignItems: 'center' }}>
-            <Chip
-              label="Sluggish first"
-              color={sort === 'sluggish' ? 'primary' : 'default'}
-              variant={sort === 'sluggish' ? 'filled' : 'outlined'}
-              onClick={() => onSort('sluggish')}
-              aria-pressed={sort === 'sluggish'}
-            />
+            {wide ? (
+              <Chip
+                label="Sluggish first"
+                color={sort === 'sluggish' ? 'primary' : 'default'}
+                variant={sort === 'sluggish' ? 'filled' : 'outlined'}
+                onClick={() => onSort('sluggish')}
+                aria-pressed={sort === 'sluggish'}
+              />
+            ) : (
+              <TextField
+                select
+                size="small"
+                label="Sort"
+                value={sort}
+                onChange={(e) => {
+                  const next = e.target.value as RosterSort;
+                  setSort(next);
+                  setOrder(FIRST_ORDER[next]);
+                  setPage(0);
+                }}
+                sx={{ minWidth: 200, flexGrow: 1 }}
+              >
+                {(Object.keys(SORT_WORDS) as RosterSort[]).map((key) => (
+                  <MenuItem key={key} value={key}>
+                    {SORT_WORDS[key]}
+                  </MenuItem>
+                ))}
+              </TextField>
+            )}
             <TextField
               size="small"
               label="Search student or culture"
@@ -158,15 +197,19 @@ export function RosterCard({ classId, account, now }: { classId: string; account
       )}
       {roster.data && roster.data.total > 0 && (
         <>
-          <RosterTable
-            classId={classId}
-            rows={roster.data.items}
-            sort={sort}
-            order={order}
-            onSort={onSort}
-            account={account}
-            now={now}
-          />
+          {wide ? (
+            <RosterTable
+              classId={classId}
+              rows={roster.data.items}
+              sort={sort}
+              order={order}
+              onSort={onSort}
+              account={account}
+              now={now}
+            />
+          ) : (
+            <RosterList classId={classId} rows={roster.data.items} account={account} />
+          )}
           <TablePagination
             component="div"
             count={roster.data.total}
