@@ -114,6 +114,11 @@ describe('joining a class and its comments', () => {
       .waitFor();
     await t.getByRole('button', { name: 'Sign out and use the invited address' }).waitFor();
     await t.screenshot({ path: join(RESULTS_DIR, 'class-invite-other-account-desktop.png') });
+    // Signing out from there comes back to the invitation after signing in again.
+    await t.getByRole('button', { name: 'Sign out and use the invited address' }).click();
+    await t.waitForURL(/\/sign-in\?next=%2Finvites%2F/);
+    await signIn(t, teacherEmail);
+    await t.waitForURL(link);
 
     // Signed out, the link goes by sign-in and comes back.
     await s.goto(link);

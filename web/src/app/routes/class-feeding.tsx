@@ -54,7 +54,7 @@ export function ClassFeedingRoute() {
           <Typography variant="h2" gutterBottom>
             As recorded
           </Typography>
-          <FeedingRecord feeding={f} account={account} />
+          <FeedingRecord feeding={f} account={account} readOnly />
         </CardContent>
       </Card>
       <RiseChecksCard feeding={f} account={account} readOnly={{ checks }} />

@@ -31,6 +31,13 @@ export function InvitePage({ token }: { token: string }) {
         <Alert severity={problem.kind === 'failed' ? 'error' : 'warning'} role="alert">
           <AlertTitle>{problem.title}</AlertTitle>
           {problem.message}
+          {problem.signedInAs && (
+            <>
+              {' '}
+              You are signed in as{' '}
+              <strong style={{ display: 'inline-block', overflowWrap: 'anywhere' }}>{problem.signedInAs}</strong>.
+            </>
+          )}
         </Alert>
         <Stack direction="row" spacing={1} sx={{ flexWrap: 'wrap', rowGap: 1 }}>
           {problem.kind === 'other-account' && <SwitchAccountButton />}
@@ -75,7 +82,7 @@ export function InvitePage({ token }: { token: string }) {
                   acceptProblem
                     ? isApiError(accept.error) && accept.error.status === 0
                       ? accept.error.message
-                      : `${acceptProblem.title}. ${acceptProblem.message}`
+                      : `${acceptProblem.title}. ${acceptProblem.message}${acceptProblem.signedInAs ? ` You are signed in as ${acceptProblem.signedInAs}.` : ''}`
                     : undefined
                 }
               />

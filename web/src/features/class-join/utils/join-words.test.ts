@@ -23,7 +23,10 @@ describe('inviteProblem', () => {
   it('names the signed-in account for a link sent to another address', () => {
     const p = inviteProblem(apiError(403, 'This invitation was sent to another address.'), 'theo@example.test');
     expect(p.kind).toBe('other-account');
-    expect(p.message).toBe('This invitation was sent to another address. You are signed in as theo@example.test.');
+    expect(p).toMatchObject({
+      message: 'This invitation was sent to another address.',
+      signedInAs: 'theo@example.test',
+    });
   });
 
   it('tells an unknown link from a failed load', () => {

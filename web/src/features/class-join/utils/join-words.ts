@@ -26,6 +26,8 @@ export interface JoinProblem {
   kind: 'gone' | 'other-account' | 'unknown' | 'failed';
   title: string;
   message: string;
+  /** For 'other-account': the address signed in now, said after the message. */
+  signedInAs?: string;
 }
 
 /**
@@ -46,7 +48,8 @@ export function inviteProblem(error: unknown, signedInEmail: string): JoinProble
     return {
       kind: 'other-account',
       title: 'This invitation is not for this account',
-      message: `${said} You are signed in as ${signedInEmail}.`.trim(),
+      message: said || 'This invitation was sent to another address.',
+      signedInAs: signedInEmail,
     };
   if (status === 404)
     return {

@@ -9,7 +9,16 @@ import { FactList } from './fact-list';
 const NONE = '—';
 
 /** The feeding as it was logged, in the baker's units, with the caution a discoloured jar calls for. */
-export function FeedingRecord({ feeding: f, account }: { feeding: Feeding; account: Account }) {
+export function FeedingRecord({
+  feeding: f,
+  account,
+  readOnly = false,
+}: {
+  feeding: Feeding;
+  account: Account;
+  /** Someone else's feeding (an instructor's view): "you" is not the reader. */
+  readOnly?: boolean;
+}) {
   const temperature = (c: number | null) => (c === null ? NONE : formatTemperature(c, account.temperatureUnit, 1));
   const grams = [f.starterG, f.flourG, f.waterG];
   const facts = [
@@ -34,7 +43,7 @@ export function FeedingRecord({ feeding: f, account }: { feeding: Feeding; accou
       value: f.initialHeightMm === null ? NONE : formatHeight(f.initialHeightMm, account.unitSystem),
     },
     {
-      label: 'What you noticed',
+      label: readOnly ? 'What the baker noticed' : 'What you noticed',
       value:
         f.observations.length === 0 ? 'Nothing noted' : f.observations.map((o) => OBSERVATION_LABELS[o]).join(', '),
     },
