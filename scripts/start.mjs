@@ -19,6 +19,7 @@ import {
 import { readDemoAccounts } from './lib/demo.mjs';
 import { startFakeMail } from './lib/fake-mail.mjs';
 import { startFakePush } from './lib/fake-push.mjs';
+import { startFakeS3 } from './lib/fake-s3.mjs';
 import { fail, log, run } from './lib/run.mjs';
 
 const port = Number(process.env.PORT ?? 3000);
@@ -51,12 +52,13 @@ let api = null;
 // The local fake mail server and push service, unless SMTP_URL names a real mail server.
 let fakeMail = null;
 let fakePush = null;
+let fakeS3 = null;
 let stopping = false;
 function stopAll(code) {
   if (stopping) return;
   stopping = true;
   const finish = async () => {
-    await Promise.all([fakeMail?.stop(), fakePush?.stop()]);
+    await Promise.all([fakeMail?.stop(), fakePush?.stop(), fakeS3?.stop()]);
     cluster?.stop();
     log(code === 0 ? 'stopped' : `stopped (exit ${code})`);
     process.exit(code);
@@ -100,7 +102,21 @@ if (!stopping && !process.env.SMTP_URL) {
     stopAll(1);
   }
 }
+// Photos go to a local fake S3 unless S3_ENDPOINT names a real store.
+if (!stopping && !process.env.S3_ENDPOINT) {
+  try {
+    fakeS3 = await startFakeS3({
+      port: Number(process.env.FAKE_S3_PORT ?? 2528),
+      directory: join(dataDir, 'fake-s3'),
+      quiet: true,
+    });
+  } catch (error) {
+    process.stderr.write(`[peakwise] ${error.message}\n`);
+    stopAll(1);
+  }
+}
 const fakeEnv = {
+  ...(fakeS3 ? fakeS3.env : {}),
   ...(fakeMail ? { SMTP_URL: fakeMail.smtpUrl, DEV_MAIL_URL: fakeMail.httpUrl } : {}),
   ...(fakePush ? { FAKE_PUSH_URL: fakePush.url, DEV_PUSH_URL: fakePush.url, PUSH_CA_FILE: fakePush.certFile } : {}),
 };

@@ -12,6 +12,7 @@ import { ensureChromium, ensureNodeModules, ensurePostgres } from './lib/install
 import { LocalCluster, clusterParent } from './lib/postgres.mjs';
 import { startFakeMail } from './lib/fake-mail.mjs';
 import { startFakePush } from './lib/fake-push.mjs';
+import { startFakeS3 } from './lib/fake-s3.mjs';
 import { apiEntry, cliEntry, ensureDataDir, root, webDist } from './lib/project.mjs';
 import { log, runAsync } from './lib/run.mjs';
 
@@ -38,6 +39,7 @@ let cluster = null;
 let server = null;
 let fakeMail = null;
 let fakePush = null;
+let fakeS3 = null;
 
 async function step(name, fn) {
   const started = Date.now();
@@ -106,7 +108,7 @@ async function startTestDatabase() {
   return cluster.url('peakwise_test');
 }
 
-function startServer(databaseUrl, port, mail, push) {
+function startServer(databaseUrl, port, mail, push, s3) {
   return new Promise((resolve, reject) => {
     server = spawn('node', [apiEntry], {
       cwd: root,
@@ -125,6 +127,7 @@ function startServer(databaseUrl, port, mail, push) {
         DEV_MAIL_URL: mail.httpUrl,
         PUSH_CA_FILE: push.certFile,
         DEV_PUSH_URL: push.url,
+        ...s3.env,
         NODE_ENV: 'test',
       },
     });
@@ -151,6 +154,7 @@ function cleanUp() {
   }
   if (fakeMail && fakeMail.child.exitCode === null) fakeMail.child.kill('SIGTERM');
   if (fakePush && fakePush.child.exitCode === null) fakePush.child.kill('SIGTERM');
+  if (fakeS3 && fakeS3.child.exitCode === null) fakeS3.child.kill('SIGTERM');
   cluster?.stop();
 }
 process.on('SIGINT', () => {
@@ -198,7 +202,10 @@ try {
           file: null,
           quiet: true,
         });
-        await startServer(databaseUrl, port, fakeMail, fakePush);
+        const s3Dir = join(root, '.data', 'fake-s3-test');
+        rmSync(s3Dir, { recursive: true, force: true });
+        fakeS3 = await startFakeS3({ port: smtpPort + 3, directory: s3Dir, quiet: true });
+        await startServer(databaseUrl, port, fakeMail, fakePush, fakeS3);
         return vitest('e2e', 'web', ['--config', 'vitest.e2e.config.ts'], { E2E_BASE_URL: `http://127.0.0.1:${port}` });
       });
     }

@@ -21,6 +21,19 @@ export interface AppConfig {
   alertPollingSeconds?: number;
   /** Web push (api/src/push/); left out, the defaults below apply (tests). */
   push?: PushConfig;
+  /** Photo storage (api/src/photo/): an S3-compatible bucket; left out, uploads answer 503 (tests that need it pass one). */
+  storage?: StorageConfig;
+}
+
+export interface StorageConfig {
+  /** S3-compatible endpoint (S3_ENDPOINT); null: the AWS endpoint of `region`. `npm start` runs a fake one. */
+  endpoint: string | null;
+  bucket: string;
+  region: string;
+  accessKeyId: string;
+  secretAccessKey: string;
+  /** Remove objects no photo row names (left by a failed delete or upload) at start and hourly. */
+  sweep: boolean;
 }
 
 export interface PushConfig {
@@ -87,6 +100,18 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): AppConfig {
       allowPrivateEndpoints: env.NODE_ENV !== 'production',
       devServiceUrl: env.NODE_ENV === 'production' ? null : env.DEV_PUSH_URL || null,
     },
+    ...(env.S3_BUCKET
+      ? {
+          storage: {
+            endpoint: env.S3_ENDPOINT || null,
+            bucket: env.S3_BUCKET,
+            region: env.S3_REGION || 'us-east-1',
+            accessKeyId: required(env, 'S3_ACCESS_KEY_ID'),
+            secretAccessKey: required(env, 'S3_SECRET_ACCESS_KEY'),
+            sweep: env.S3_SWEEP !== 'off',
+          },
+        }
+      : {}),
   };
 }
 

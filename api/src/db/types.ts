@@ -258,6 +258,27 @@ export interface IdempotencyKey {
   statusCode: number | null;
 }
 
+export interface Photo {
+  accountId: string;
+  bakePlanId: string | null;
+  caption: string | null;
+  createdAt: Generated<Timestamp>;
+  cultureId: string | null;
+  displayKey: string;
+  feedingId: string | null;
+  height: number;
+  id: Generated<string>;
+  riseCheckId: string | null;
+  subjectType: string;
+  thumbnailKey: string;
+  width: number;
+}
+
+export interface PhotoObjectTrash {
+  objectKey: string;
+  trashedAt: Generated<Timestamp>;
+}
+
 export interface PushSubscription {
   accountId: string;
   auth: string;
@@ -320,6 +341,8 @@ export interface DB {
   formulaBlendFlour: FormulaBlendFlour;
   formulaIngredient: FormulaIngredient;
   idempotencyKey: IdempotencyKey;
+  photo: Photo;
+  photoObjectTrash: PhotoObjectTrash;
   pushSubscription: PushSubscription;
   riseCheck: RiseCheck;
   schemaMigration: SchemaMigration;
