@@ -6,6 +6,7 @@
 import { writeFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { repoRoot } from '../repo-root.js';
+import { stopOnSignal } from './stop-on-signal.js';
 import { startFakePush } from './fake-push.js';
 
 const port = Number(process.env.FAKE_PUSH_PORT ?? 2527);
@@ -16,11 +17,4 @@ const server = await startFakePush({ port, max: Number(process.env.FAKE_PUSH_MAX
 writeFileSync(certFile, server.certificate);
 process.stdout.write(`fake push service on ${server.url} (certificate in ${certFile})\n`);
 
-let closing = false;
-const stop = (): void => {
-  if (closing) return;
-  closing = true;
-  void server.close().then(() => process.exit(0));
-};
-process.on('SIGINT', stop);
-process.on('SIGTERM', stop);
+stopOnSignal(() => server.close());

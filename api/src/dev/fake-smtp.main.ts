@@ -4,6 +4,7 @@
 //   empty keeps messages in memory only), FAKE_SMTP_MAX (200 messages kept).
 import { join } from 'node:path';
 import { repoRoot } from '../repo-root.js';
+import { stopOnSignal } from './stop-on-signal.js';
 import { startFakeSmtp } from './fake-smtp.js';
 
 function port(name: string, fallback: number): number {
@@ -21,11 +22,4 @@ const server = await startFakeSmtp({
 });
 process.stdout.write(`fake SMTP on ${server.smtpUrl}, messages at ${server.httpUrl}/messages\n`);
 
-let closing = false;
-const stop = (): void => {
-  if (closing) return;
-  closing = true;
-  void server.close().then(() => process.exit(0));
-};
-process.on('SIGINT', stop);
-process.on('SIGTERM', stop);
+stopOnSignal(() => server.close());
