@@ -26,3 +26,4 @@ export * from './alerts/index.js';
 export * from './classroom/index.js';
 export * from './contracts/password-reset.js';
 export * from './contracts/dev-mail.js';
+export * from './logger-import/index.js';
