@@ -27,13 +27,12 @@ function heightAt(hours: number, h0: number, peakHours: number, multiple: number
 }
 
 /** A student with their own session, made through the API (no browser needed for their side). */
-async function student(base: string, name: string): Promise<APIRequestContext> {
+async function student(base: string, name: string): Promise<{ api: APIRequestContext; email: string }> {
   const api = await request.newContext({ baseURL: base });
-  const res = await api.post('/api/auth/sign-up', {
-    data: { displayName: name, email: uniqueEmail(name.split(' ')[0]!.toLowerCase()), password: PASSWORD },
-  });
+  const email = uniqueEmail(name.split(' ')[0]!.toLowerCase());
+  const res = await api.post('/api/auth/sign-up', { data: { displayName: name, email, password: PASSWORD } });
   expect(res.status(), await res.text()).toBe(201);
-  return api;
+  return { api, email };
 }
 
 async function post<T = { id: string }>(api: APIRequestContext, url: string, data: unknown, status = 201): Promise<T> {
@@ -79,124 +78,151 @@ describe('the instructor’s class', () => {
     await Promise.all(apis.splice(0).map((a) => a.dispose()));
   });
 
-  it('creates a class, students join by code, sluggish first finds Pip, and its culture opens read-only', async () => {
-    const base = baseUrl();
-    const desk = await launchBrowser(DESKTOP);
-    browsers.push(desk);
-    const page = await desk.context.newPage();
+  it(
+    'creates a class, students join by code, sluggish first finds Pip, and its culture opens read-only',
+    { timeout: 150_000 },
+    async () => {
+      const base = baseUrl();
+      const desk = await launchBrowser(DESKTOP);
+      browsers.push(desk);
+      const page = await desk.context.newPage();
 
-    // The instructor signs up; an admin would give the role, here the database does.
-    const ines = uniqueEmail('ines');
-    await signUp(page, base, 'Ines Marlow', ines);
-    makeInstructor(ines);
-    await page.goto(`${base}/`);
-    const rail = page.getByTestId('side-rail');
-    await rail.getByRole('link', { name: 'Classroom' }).click();
-    await page.waitForURL(`${base}/classes`);
-    await page.getByRole('heading', { name: 'No classes yet' }).waitFor();
+      // The instructor signs up; an admin would give the role, here the database does.
+      const ines = uniqueEmail('ines');
+      await signUp(page, base, 'Ines Marlow', ines);
+      makeInstructor(ines);
+      await page.goto(`${base}/`);
+      const rail = page.getByTestId('side-rail');
+      await rail.getByRole('link', { name: 'Classroom' }).click();
+      await page.waitForURL(`${base}/classes`);
+      await page.getByRole('heading', { name: 'No classes yet' }).waitFor();
 
-    // New class: the dates are checked in the form before the API sees them.
-    await page.getByRole('button', { name: 'New class' }).click();
-    await page.getByLabel('Class name').fill('Weekend Levain');
-    await page.getByLabel('What the class covers').fill('Six weekends of keeping a levain and baking with it.');
-    await page.getByLabel('First day').fill(isoDay(Date.now() + 2 * 24 * HOUR));
-    await page.getByLabel('Last day').fill(isoDay(Date.now()));
-    await page.getByRole('button', { name: 'Create class' }).click();
-    await page.getByText('The last day comes on or after the first.').waitFor();
-    await page.getByLabel('First day').fill(isoDay(Date.now() - 8 * 24 * HOUR));
-    await page.getByLabel('Last day').fill(isoDay(Date.now() + 33 * 24 * HOUR));
-    await page.screenshot({ path: join(RESULTS_DIR, 'classroom-new-class.png') });
-    await page.getByRole('button', { name: 'Create class' }).click();
-    await page.waitForURL(/\/classes\/[0-9a-f-]{36}$/);
-    const classId = new URL(page.url()).pathname.split('/')[2]!;
-    await page.getByRole('heading', { name: 'Weekend Levain', level: 1 }).waitFor();
-    await page.getByText('Week 2 of 6', { exact: false }).first().waitFor();
-    const code = (await page.getByTestId('join-code').textContent())!.trim();
-    expect(code).toMatch(/^[A-HJ-NP-Z2-9]{8}$/);
+      // New class: the dates are checked in the form before the API sees them.
+      await page.getByRole('button', { name: 'New class' }).click();
+      await page.getByLabel('Class name').fill('Weekend Levain');
+      await page.getByLabel('What the class covers').fill('Six weekends of keeping a levain and baking with it.');
+      await page.getByLabel('First day').fill(isoDay(Date.now() + 2 * 24 * HOUR));
+      await page.getByLabel('Last day').fill(isoDay(Date.now()));
+      await page.getByRole('button', { name: 'Create class' }).click();
+      await page.getByText('The last day comes on or after the first.').waitFor();
+      await page.getByLabel('First day').fill(isoDay(Date.now() - 8 * 24 * HOUR));
+      await page.getByLabel('Last day').fill(isoDay(Date.now() + 33 * 24 * HOUR));
+      await page.screenshot({ path: join(RESULTS_DIR, 'classroom-new-class.png') });
+      await page.getByRole('button', { name: 'Create class' }).click();
+      await page.waitForURL(/\/classes\/[0-9a-f-]{36}$/);
+      const classId = new URL(page.url()).pathname.split('/')[2]!;
+      await page.getByRole('heading', { name: 'Weekend Levain', level: 1 }).waitFor();
+      await page.getByText('Week 2 of 6', { exact: false }).first().waitFor();
+      const code = (await page.getByTestId('join-code').textContent())!.trim();
+      expect(code).toMatch(/^[A-HJ-NP-Z2-9]{8}$/);
 
-    // Three students join by code: Theo's Bramble is steady, Dev's Pip slows from 4 h to 6.5 h
-    // (the roster's 25 % line, shared/src/classroom/roster.ts), Amara has no culture yet.
-    const theo = await student(base, 'Theo Park');
-    const dev = await student(base, 'Dev Rowan');
-    const amara = await student(base, 'Amara Quist');
-    apis.push(theo, dev, amara);
-    await keepCulture(theo, 'Bramble', [4.5, 4.4, 4.6, 4.5, 4.5, 4.4, 4.6]);
-    const pipId = await keepCulture(dev, 'Pip', [4, 4.1, 3.9, 4, 6.2, 6.5, 6.8]);
-    for (const api of [theo, dev, amara]) await post(api, '/api/class-join', { code }, 200);
+      // Three students join by code: Theo's Bramble is steady, Dev's Pip slows from 4 h to 6.5 h
+      // (the roster's 25 % line, shared/src/classroom/roster.ts), Amara has no culture yet.
+      const { api: theo } = await student(base, 'Theo Park');
+      const { api: dev, email: devEmail } = await student(base, 'Dev Rowan');
+      const { api: amara } = await student(base, 'Amara Quist');
+      apis.push(theo, dev, amara);
+      await keepCulture(theo, 'Bramble', [4.5, 4.4, 4.6, 4.5, 4.5, 4.4, 4.6]);
+      const pipId = await keepCulture(dev, 'Pip', [4, 4.1, 3.9, 4, 6.2, 6.5, 6.8]);
+      for (const api of [theo, dev, amara]) await post(api, '/api/class-join', { code }, 200);
 
-    // The instructor's page: the summary names Pip before any sorting.
-    await page.reload();
-    const summary = page.getByTestId('roster-summary');
-    await summary.getByText('Pip (Dev Rowan)').waitFor();
-    expect(await summary.textContent()).toContain('sluggish');
-    const table = page.getByRole('table', { name: 'Roster' });
-    await table.getByText('Bramble').waitFor();
+      // The instructor's page: the summary names Pip before any sorting.
+      await page.reload();
+      const summary = page.getByTestId('roster-summary');
+      await summary.getByText('Pip (Dev Rowan)').waitFor();
+      expect(await summary.textContent()).toContain('sluggish');
+      const table = page.getByRole('table', { name: 'Roster' });
+      await table.getByText('Bramble').waitFor();
 
-    // Sort by student, then back to sluggish first: Dev Rowan's Pip tops the table.
-    await table.getByRole('button', { name: 'Student · culture' }).click();
-    await expect.poll(() => table.locator('tbody tr').first().textContent()).toContain('Amara Quist');
-    await page.getByRole('button', { name: 'Sluggish first' }).click();
-    await expect.poll(() => table.locator('tbody tr').first().textContent()).toContain('Dev Rowan');
-    const first = table.locator('tbody tr').first();
-    expect(await first.textContent()).toContain('Sluggish');
-    expect(await first.textContent()).toContain('Slower');
-    // Filtering by a flag leaves only that culture.
-    await page
-      .getByRole('group', { name: 'Show only rows flagged' })
-      .getByRole('button', { name: 'No culture yet' })
-      .click();
-    await expect.poll(() => table.locator('tbody tr').count()).toBe(1);
-    expect(await table.textContent()).toContain('Amara Quist');
-    await page.getByRole('group', { name: 'Show only rows flagged' }).getByRole('button', { name: 'All' }).click();
-    await expect.poll(() => table.locator('tbody tr').count()).toBe(3);
-    await page.getByTestId('class-chart').locator('svg').first().waitFor();
-    await page.screenshot({ path: join(RESULTS_DIR, 'classroom-class-desktop.png'), fullPage: true });
+      // Sort by student, then back to sluggish first: Dev Rowan's Pip tops the table.
+      await table.getByRole('button', { name: 'Student · culture' }).click();
+      await expect.poll(() => table.locator('tbody tr').first().textContent()).toContain('Amara Quist');
+      await page.getByRole('button', { name: 'Sluggish first' }).click();
+      await expect.poll(() => table.locator('tbody tr').first().textContent()).toContain('Dev Rowan');
+      const first = table.locator('tbody tr').first();
+      expect(await first.textContent()).toContain('Sluggish');
+      expect(await first.textContent()).toContain('Slower');
+      // Filtering by a flag leaves only that culture.
+      await page
+        .getByRole('group', { name: 'Show only rows flagged' })
+        .getByRole('button', { name: 'No culture yet' })
+        .click();
+      await expect.poll(() => table.locator('tbody tr').count()).toBe(1);
+      expect(await table.textContent()).toContain('Amara Quist');
+      await page.getByRole('group', { name: 'Show only rows flagged' }).getByRole('button', { name: 'All' }).click();
+      await expect.poll(() => table.locator('tbody tr').count()).toBe(3);
+      await page.getByTestId('class-chart').locator('svg').first().waitFor();
+      await page.screenshot({ path: join(RESULTS_DIR, 'classroom-class-desktop.png'), fullPage: true });
 
-    // The CSV link carries the table's order; the API answers it.
-    const csvHref = await page.getByRole('link', { name: 'Download roster (CSV)' }).getAttribute('href');
-    const csv = await page.request.get(`${base}${csvHref}`);
-    expect(csv.status()).toBe(200);
-    expect((await csv.text()).split('\r\n')[1]).toContain('Dev Rowan,Pip');
+      // The CSV link carries the table's order; the API answers it.
+      const csvHref = await page.getByRole('link', { name: 'Download roster (CSV)' }).getAttribute('href');
+      const csv = await page.request.get(`${base}${csvHref}`);
+      expect(csv.status()).toBe(200);
+      expect((await csv.text()).split('\r\n')[1]).toContain('Dev Rowan,Pip');
 
-    // A row opens the student's culture, read-only, with the student's charts.
-    await first.getByRole('link', { name: 'Pip' }).click();
-    await page.waitForURL(`${base}/classes/${classId}/cultures/${pipId}`);
-    await page.getByTestId('read-only-banner').waitFor();
-    await page.getByRole('heading', { name: 'Pip', level: 1 }).waitFor();
-    await page.getByText('Dev Rowan’s culture', { exact: false }).waitFor();
-    await page.getByRole('heading', { name: 'How it answers to temperature' }).waitFor();
-    await page.getByTestId('rise-overlay').waitFor();
-    expect(await page.getByRole('link', { name: 'Log feeding' }).count()).toBe(0);
-    const feedingLink = page.getByRole('table', { name: 'Feedings' }).getByRole('link').first();
-    expect(await feedingLink.getAttribute('href')).toMatch(new RegExp(`^/classes/${classId}/feedings/`));
-    await page.screenshot({ path: join(RESULTS_DIR, 'classroom-culture-desktop.png'), fullPage: true });
+      // A row opens the student's culture, read-only, with the student's charts.
+      await first.getByRole('link', { name: 'Pip' }).click();
+      await page.waitForURL(`${base}/classes/${classId}/cultures/${pipId}`);
+      await page.getByTestId('read-only-banner').waitFor();
+      await page.getByRole('heading', { name: 'Pip', level: 1 }).waitFor();
+      await page.getByText('Dev Rowan’s culture', { exact: false }).waitFor();
+      await page.getByRole('heading', { name: 'How it answers to temperature' }).waitFor();
+      await page.getByTestId('rise-overlay').waitFor();
+      expect(await page.getByRole('link', { name: 'Log feeding' }).count()).toBe(0);
+      const feedingLink = page.getByRole('table', { name: 'Feedings' }).getByRole('link').first();
+      expect(await feedingLink.getAttribute('href')).toMatch(new RegExp(`^/classes/${classId}/feedings/`));
+      await page.screenshot({ path: join(RESULTS_DIR, 'classroom-culture-desktop.png'), fullPage: true });
 
-    // The same pages at phone size.
-    const phone = await launchBrowser(PHONE);
-    browsers.push(phone);
-    const p = await phone.context.newPage();
-    await signInAs(p, base, ines);
-    await p.getByTestId('bottom-nav').getByRole('link', { name: 'Classroom' }).click();
-    await p.getByRole('link', { name: /Weekend Levain/ }).click();
-    await p.getByTestId('roster-summary').getByText('Pip (Dev Rowan)').waitFor();
-    await p.screenshot({ path: join(RESULTS_DIR, 'classroom-class-phone.png') });
-    // On a phone the roster is a list, sluggish first too, flags in sight without scrolling sideways.
-    const list = p.getByRole('list', { name: 'Roster' });
-    await list.scrollIntoViewIfNeeded();
-    expect(await list.getByRole('link').first().textContent()).toContain('Dev Rowan');
-    await p.screenshot({ path: join(RESULTS_DIR, 'classroom-roster-phone.png') });
-    await p.screenshot({ path: join(RESULTS_DIR, 'classroom-class-phone-full.png'), fullPage: true });
-    await p.goto(`${base}/classes/${classId}/cultures/${pipId}`);
-    await p.getByTestId('read-only-banner').waitFor();
-    await p.getByRole('heading', { name: 'How it answers to temperature' }).waitFor();
-    await p.screenshot({ path: join(RESULTS_DIR, 'classroom-culture-phone.png') });
+      // The same pages at phone size.
+      const phone = await launchBrowser(PHONE);
+      browsers.push(phone);
+      const p = await phone.context.newPage();
+      await signInAs(p, base, ines);
+      await p.getByTestId('bottom-nav').getByRole('link', { name: 'Classroom' }).click();
+      await p.getByRole('link', { name: /Weekend Levain/ }).click();
+      await p.getByTestId('roster-summary').getByText('Pip (Dev Rowan)').waitFor();
+      await p.screenshot({ path: join(RESULTS_DIR, 'classroom-class-phone.png') });
+      // On a phone the roster is a list, sluggish first too, flags in sight without scrolling sideways.
+      const list = p.getByRole('list', { name: 'Roster' });
+      await list.scrollIntoViewIfNeeded();
+      expect(await list.getByRole('link').first().textContent()).toContain('Dev Rowan');
+      await p.screenshot({ path: join(RESULTS_DIR, 'classroom-roster-phone.png') });
+      await p.screenshot({ path: join(RESULTS_DIR, 'classroom-class-phone-full.png'), fullPage: true });
+      await p.goto(`${base}/classes/${classId}/cultures/${pipId}`);
+      await p.getByTestId('read-only-banner').waitFor();
+      await p.getByRole('heading', { name: 'How it answers to temperature' }).waitFor();
+      await p.screenshot({ path: join(RESULTS_DIR, 'classroom-culture-phone.png') });
 
-    // A student sees the plain class page and can leave.
-    const devRoster = await dev.get(`/api/classes/${classId}/roster`);
-    expect(devRoster.status()).toBe(403);
-    const rows = (await (await page.request.get(`${base}/api/classes/${classId}/roster`)).json()) as RosterResponse;
-    expect(rows.total).toBe(3);
-  });
+      // A student sees the plain class page, no roster, and can leave: sharing ends at once.
+      expect((await dev.get(`/api/classes/${classId}/roster`)).status()).toBe(403);
+      const devPhone = await launchBrowser(PHONE);
+      browsers.push(devPhone);
+      const d = await devPhone.context.newPage();
+      await signInAs(d, base, devEmail);
+      await d.getByRole('button', { name: 'Account menu for Dev Rowan' }).click();
+      await d.getByRole('menuitem', { name: 'Classroom' }).click();
+      await d.waitForURL(`${base}/classes`);
+      const card = d.getByRole('list', { name: 'Your classes' }).getByRole('listitem').first();
+      await card.getByText('Taught by Ines Marlow').waitFor();
+      expect(await card.textContent()).toContain('Student');
+      await d.screenshot({ path: join(RESULTS_DIR, 'classroom-classes-student-phone.png') });
+      await card.getByRole('link').first().click();
+      await d.waitForURL(`${base}/classes/${classId}`);
+      await d.getByRole('heading', { name: 'What you share' }).waitFor();
+      expect(await d.getByRole('heading', { name: 'Roster' }).count()).toBe(0);
+      await d.screenshot({ path: join(RESULTS_DIR, 'classroom-class-student-phone.png') });
+      await d.getByRole('button', { name: 'Leave class' }).click();
+      const dialog = d.getByRole('dialog');
+      await dialog.getByText('Sharing ends at once', { exact: false }).waitFor();
+      await d.screenshot({ path: join(RESULTS_DIR, 'classroom-leave-phone.png') });
+      await dialog.getByRole('button', { name: 'Leave class' }).click();
+      await d.waitForURL(`${base}/classes`);
+      await d.getByText('No classes yet').waitFor();
+      const after = (await (await page.request.get(`${base}/api/classes/${classId}/roster`)).json()) as RosterResponse;
+      expect(after.items.map((r) => r.studentName).sort()).toEqual(['Amara Quist', 'Theo Park']);
+      expect((await page.request.get(`${base}/api/classes/${classId}/cultures/${pipId}`)).status()).toBe(404);
+    },
+  );
 });
 
 async function signInAs(page: Page, base: string, email: string): Promise<void> {

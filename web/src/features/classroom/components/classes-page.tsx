@@ -6,6 +6,7 @@ import Button from '@mui/material/Button';
 import Card from '@mui/material/Card';
 import CardContent from '@mui/material/CardContent';
 import Dialog from '@mui/material/Dialog';
+import DialogActions from '@mui/material/DialogActions';
 import DialogContent from '@mui/material/DialogContent';
 import DialogTitle from '@mui/material/DialogTitle';
 import Stack from '@mui/material/Stack';
@@ -101,6 +102,9 @@ export function ClassesPage() {
           </Typography>
           <NewClassForm onCreated={(created) => void navigate(`/classes/${created.id}`)} />
         </DialogContent>
+        <DialogActions>
+          <Button onClick={() => setCreating(false)}>Cancel</Button>
+        </DialogActions>
       </Dialog>
       <LeaveClassDialog
         bakingClass={leaving}
