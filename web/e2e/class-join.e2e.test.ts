@@ -148,6 +148,7 @@ describe('joining a class and its comments', () => {
     await t.getByRole('button', { name: 'Post comment' }).click();
     const teacherComment = t.getByTestId('comment').filter({ hasText: 'Lovely rise' });
     await teacherComment.getByText('You', { exact: true }).waitFor();
+    await expect.poll(() => t.getByRole('button', { name: 'Post comment' }).isEnabled()).toBe(true);
     await t.screenshot({ path: join(RESULTS_DIR, 'class-feeding-desktop.png'), fullPage: true });
 
     // The student sees it under their own feeding, marked as the instructor's, and the alert.
@@ -201,6 +202,7 @@ describe('joining a class and its comments', () => {
     await t.getByLabel('Comment for your student').fill('Check the dough at the second fold.');
     await t.getByRole('button', { name: 'Post comment' }).click();
     await t.getByTestId('comment').filter({ hasText: 'second fold' }).waitFor();
+    await expect.poll(() => t.getByRole('button', { name: 'Post comment' }).isEnabled()).toBe(true);
     await t.screenshot({ path: join(RESULTS_DIR, 'class-plan-desktop.png'), fullPage: true });
     await t.setViewportSize(PHONE);
     await t.screenshot({ path: join(RESULTS_DIR, 'class-plan-phone.png'), fullPage: true });
@@ -249,6 +251,7 @@ describe('joining a class and its comments', () => {
       await s.getByLabel('Join code').fill('ABCD-EFGH');
       await s.getByRole('button', { name: 'Find class' }).click();
       await s.getByText('No class has this code.').waitFor();
+      await expect.poll(() => s.getByRole('button', { name: 'Find class' }).isEnabled()).toBe(true);
       await s.screenshot({ path: join(RESULTS_DIR, `class-join-unknown-${size}.png`) });
       await s.getByLabel('Join code').fill(typed);
       await s.getByRole('button', { name: 'Find class' }).click();
@@ -257,6 +260,9 @@ describe('joining a class and its comments', () => {
       await s.screenshot({ path: join(RESULTS_DIR, `class-join-${size}.png`), fullPage: true });
       await s.getByRole('button', { name: 'Join class' }).click();
       await s.getByRole('status').filter({ hasText: 'You joined Rye Basics' }).waitFor();
+      // Looking the code up again says so instead of offering to join twice.
+      await s.getByRole('button', { name: 'Find class' }).click();
+      await s.getByRole('status').filter({ hasText: 'You are already a student in Rye Basics' }).waitFor();
     }
   });
 });
