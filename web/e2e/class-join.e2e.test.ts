@@ -44,6 +44,13 @@ async function inviteLinkFor(page: Page, base: string, email: string): Promise<s
   throw new Error(`no mail reached ${email}`);
 }
 
+/** Waits for running CSS transitions (a button fading back from its loading state) before a screenshot. */
+async function settled(page: Page): Promise<void> {
+  await expect
+    .poll(() => page.evaluate(() => document.getAnimations().filter((a) => a.playState === 'running').length))
+    .toBe(0);
+}
+
 async function signIn(page: Page, email: string): Promise<void> {
   await page.getByLabel('E-mail').fill(email);
   await page.getByLabel('Password', { exact: true }).fill(PASSWORD);
@@ -149,6 +156,7 @@ describe('joining a class and its comments', () => {
     const teacherComment = t.getByTestId('comment').filter({ hasText: 'Lovely rise' });
     await teacherComment.getByText('You', { exact: true }).waitFor();
     await expect.poll(() => t.getByRole('button', { name: 'Post comment' }).isEnabled()).toBe(true);
+    await settled(t);
     await t.screenshot({ path: join(RESULTS_DIR, 'class-feeding-desktop.png'), fullPage: true });
 
     // The student sees it under their own feeding, marked as the instructor's, and the alert.
@@ -203,6 +211,7 @@ describe('joining a class and its comments', () => {
     await t.getByRole('button', { name: 'Post comment' }).click();
     await t.getByTestId('comment').filter({ hasText: 'second fold' }).waitFor();
     await expect.poll(() => t.getByRole('button', { name: 'Post comment' }).isEnabled()).toBe(true);
+    await settled(t);
     await t.screenshot({ path: join(RESULTS_DIR, 'class-plan-desktop.png'), fullPage: true });
     await t.setViewportSize(PHONE);
     await t.screenshot({ path: join(RESULTS_DIR, 'class-plan-phone.png'), fullPage: true });
@@ -252,11 +261,13 @@ describe('joining a class and its comments', () => {
       await s.getByRole('button', { name: 'Find class' }).click();
       await s.getByText('No class has this code.').waitFor();
       await expect.poll(() => s.getByRole('button', { name: 'Find class' }).isEnabled()).toBe(true);
+      await settled(s);
       await s.screenshot({ path: join(RESULTS_DIR, `class-join-unknown-${size}.png`) });
       await s.getByLabel('Join code').fill(typed);
       await s.getByRole('button', { name: 'Find class' }).click();
       await s.getByTestId('join-preview').getByRole('heading', { name: 'Rye Basics' }).waitFor();
       await expect.poll(() => s.getByRole('button', { name: 'Find class' }).isEnabled()).toBe(true);
+      await settled(s);
       await s.screenshot({ path: join(RESULTS_DIR, `class-join-${size}.png`), fullPage: true });
       await s.getByRole('button', { name: 'Join class' }).click();
       await s.getByRole('status').filter({ hasText: 'You joined Rye Basics' }).waitFor();
