@@ -4,6 +4,7 @@ import { useParams } from 'react-router-dom';
 import { planQueryOptions } from '@/features/bench/api/get-plan';
 import { LivePlanPage } from '@/features/bench/components/live-plan-page';
 import { OwnerComments } from '@/features/comments/components/owner-comments';
+import { PhotosCard } from '@/features/photos/components/photos-card';
 
 export function BenchPlanRoute() {
   const { id = '' } = useParams();
@@ -12,6 +13,11 @@ export function BenchPlanRoute() {
   return (
     <>
       <LivePlanPage key={id} planId={id} />
+      {loaded && (
+        <Box sx={{ mt: 3 }}>
+          <PhotosCard key={id} subject={{ type: 'bake-plan', id }} />
+        </Box>
+      )}
       {loaded && (
         <Box sx={{ mt: 3 }}>
           <OwnerComments key={id} subject={{ type: 'bake-plan', id }} />

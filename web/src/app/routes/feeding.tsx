@@ -4,6 +4,7 @@ import { useParams } from 'react-router-dom';
 import { OwnerComments } from '@/features/comments/components/owner-comments';
 import { feedingQueryOptions } from '@/features/feeding-detail/api/get-feeding';
 import { FeedingPage } from '@/features/feeding-detail/components/feeding-page';
+import { PhotosCard } from '@/features/photos/components/photos-card';
 
 export function FeedingRoute() {
   const { id = '' } = useParams();
@@ -12,6 +13,11 @@ export function FeedingRoute() {
   return (
     <>
       <FeedingPage key={id} feedingId={id} />
+      {loaded && (
+        <Box sx={{ mt: 3 }}>
+          <PhotosCard key={id} subject={{ type: 'feeding', id }} />
+        </Box>
+      )}
       {loaded && (
         <Box sx={{ mt: 3 }}>
           <OwnerComments key={id} subject={{ type: 'feeding', id }} />

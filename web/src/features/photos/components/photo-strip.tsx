@@ -1,4 +1,4 @@
-import type { Account, FeedingListQuery, FeedingListResponse, Photo } from '@peakwise/shared';
+import type { FeedingListQuery, FeedingListResponse, Photo } from '@peakwise/shared';
 import Box from '@mui/material/Box';
 import Card from '@mui/material/Card';
 import CardContent from '@mui/material/CardContent';
@@ -9,10 +9,11 @@ import { useQuery } from '@tanstack/react-query';
 import { useEffect, useId, useMemo, useRef, useState } from 'react';
 import { Link as RouterLink } from 'react-router-dom';
 import { LoadError } from '@/components/feedback/load-error';
+import { useSignedInAccount } from '@/lib/auth/use-signed-in-account';
 import { getFeedings } from '@/lib/logbook/get-feedings';
 import { logbookKeys } from '@/lib/logbook/query-keys';
 import { usePhotos } from '../api/get-photos';
-import { clockStyle, formatPhotoDay, formatPhotoTime, groupByFeeding } from '../utils/photo-words';
+import { clockStyle, formatPhotoClock, formatPhotoDay, formatPhotoTime, groupByFeeding } from '../utils/photo-words';
 import { PhotoThumb } from './photo-thumb';
 import { PhotoViewer } from './photo-viewer';
 
@@ -20,7 +21,6 @@ type Fetch<T> = { queryKey: readonly unknown[]; queryFn: () => Promise<T> };
 
 interface PhotoStripProps {
   cultureId: string;
-  account: Account;
   /** Where a feeding's page is: the owner's, or the class's read-only one. */
   feedingHref?: (feedingId: string) => string;
   /** Where the culture's feedings come from when they are not the viewer's own (a class's routes). */
@@ -36,7 +36,8 @@ const FEEDINGS_QUERY = { limit: 200, order: 'desc' } as const;
  * The culture's jar photos in time order, a strip that scrolls sideways and opens at the newest,
  * each run of photos under the feeding it belongs to, so the rise curves above have a picture.
  */
-export function PhotoStrip({ cultureId, account, feedingHref, source, readOnly = false }: PhotoStripProps) {
+export function PhotoStrip({ cultureId, feedingHref, source, readOnly = false }: PhotoStripProps) {
+  const account = useSignedInAccount();
   const headingId = useId();
   const photos = usePhotos({ type: 'culture', id: cultureId });
   const feedings = useQuery(
@@ -124,7 +125,8 @@ export function PhotoStrip({ cultureId, account, feedingHref, source, readOnly =
                           onOpen={() => setOpen(ordered.indexOf(photo))}
                         />
                         <Typography variant="caption" color="text.secondary" component="p" noWrap>
-                          {formatPhotoDay(photo.createdAt, account.timeZone)} · {when(photo.createdAt).split(', ')[1]}
+                          {formatPhotoDay(photo.createdAt, account.timeZone)} ·{' '}
+                          {formatPhotoClock(photo.createdAt, account.timeZone, style)}
                         </Typography>
                       </Box>
                     ))}

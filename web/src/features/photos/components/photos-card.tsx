@@ -1,4 +1,3 @@
-import type { Account } from '@peakwise/shared';
 import Box from '@mui/material/Box';
 import Card from '@mui/material/Card';
 import CardContent from '@mui/material/CardContent';
@@ -7,6 +6,7 @@ import Stack from '@mui/material/Stack';
 import Typography from '@mui/material/Typography';
 import { useId, useState } from 'react';
 import { LoadError } from '@/components/feedback/load-error';
+import { useSignedInAccount } from '@/lib/auth/use-signed-in-account';
 import { usePhotos } from '../api/get-photos';
 import { clockStyle, formatPhotoTime } from '../utils/photo-words';
 import { PhotoThumb } from './photo-thumb';
@@ -16,7 +16,6 @@ import { PhotoViewer } from './photo-viewer';
 interface PhotosCardProps {
   /** A feeding's jar photos or a bake's crumb photos. */
   subject: { type: 'feeding' | 'bake-plan'; id: string };
-  account: Account;
   /** Someone else's log (an instructor's view): photos to look at, nothing to add or change. */
   readOnly?: boolean;
 }
@@ -35,7 +34,8 @@ const WORDS = {
 } as const;
 
 /** The photos of one feeding or bake: add from the camera or gallery, thumbnails, the viewer. */
-export function PhotosCard({ subject, account, readOnly = false }: PhotosCardProps) {
+export function PhotosCard({ subject, readOnly = false }: PhotosCardProps) {
+  const account = useSignedInAccount();
   const headingId = useId();
   const photos = usePhotos(subject);
   const [open, setOpen] = useState<number | null>(null);

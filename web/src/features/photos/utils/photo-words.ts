@@ -7,17 +7,20 @@ export function clockStyle(unitSystem: UnitSystem): ClockStyle {
   return unitSystem === 'us' ? '12h' : '24h';
 }
 
-/** "Tue 1 Dec, 14:05" or "Tue 1 Dec, 2:05 PM" in the viewer's zone. */
-export function formatPhotoTime(iso: string, timeZone: string, style: ClockStyle): string {
-  const d = new Date(iso);
-  const day = d.toLocaleDateString('en-GB', { timeZone, weekday: 'short', day: 'numeric', month: 'short' });
-  const time = d.toLocaleTimeString(style === '12h' ? 'en-US' : 'en-GB', {
+/** "14:05" or "2:05 PM" in the viewer's zone. */
+export function formatPhotoClock(iso: string, timeZone: string, style: ClockStyle): string {
+  return new Date(iso).toLocaleTimeString(style === '12h' ? 'en-US' : 'en-GB', {
     timeZone,
     hour: style === '12h' ? 'numeric' : '2-digit',
     minute: '2-digit',
     hour12: style === '12h',
   });
-  return `${day}, ${time}`;
+}
+
+/** "Tue 1 Dec, 14:05" or "Tue 1 Dec, 2:05 PM" in the viewer's zone. */
+export function formatPhotoTime(iso: string, timeZone: string, style: ClockStyle): string {
+  const day = new Date(iso).toLocaleDateString('en-GB', { timeZone, weekday: 'short', day: 'numeric', month: 'short' });
+  return `${day}, ${formatPhotoClock(iso, timeZone, style)}`;
 }
 
 /** "1 Dec" in the viewer's zone, for the strip's small labels. */
