@@ -23,6 +23,7 @@ import { HealthModule } from './health/health.module.js';
 import { LogbookTransferModule } from './logbook-transfer/logbook-transfer.module.js';
 import { MailModule } from './mail/mail.module.js';
 import { PasswordResetModule } from './password-reset/password-reset.module.js';
+import { PhotoModule } from './photo/photo.module.js';
 import { PushModule } from './push/push.module.js';
 import { RiseCheckModule } from './rise-check/rise-check.module.js';
 import { TemperatureModule } from './temperature/temperature.module.js';
@@ -57,6 +58,7 @@ export class AppModule {
         ClassroomModule,
         ClassLogsModule,
         CommentModule,
+        PhotoModule,
       ],
       providers: [{ provide: APP_GUARD, useClass: SessionGuard }],
     };

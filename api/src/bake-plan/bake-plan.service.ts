@@ -21,6 +21,7 @@ import type { AccountRecord } from '../account/account.repository.js';
 import { AlertScheduler } from '../alert/alert.scheduler.js';
 import { fieldError } from '../common/validation.js';
 import { FormulaService } from '../formula/formula.service.js';
+import { PhotoTrash } from '../photo/photo.trash.js';
 import { calendarFileName, planCalendar } from './bake-plan.calendar.js';
 import { checkReadyAt, defaultPlanName, planInputOf, plainSettings, withPlannerErrors } from './bake-plan.input.js';
 import { PlanKineticsSource } from './bake-plan.kinetics.js';
@@ -55,6 +56,7 @@ export class BakePlanService {
     private readonly kinetics: PlanKineticsSource,
     private readonly clock: BakePlanClock,
     private readonly alerts: AlertScheduler,
+    private readonly photoTrash: PhotoTrash,
   ) {}
 
   /** The account's plan, or 404 — also for another account's id, so ids reveal nothing. */
@@ -195,6 +197,7 @@ export class BakePlanService {
 
   async delete(account: AccountRecord, id: string): Promise<void> {
     if (!(await this.plans.delete(account.id, id))) throw new NotFoundException(NOT_FOUND);
+    await this.photoTrash.empty();
   }
 
   /** A step id of this plan's timeline, else a 400 naming the path parameter. */

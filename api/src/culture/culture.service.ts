@@ -10,6 +10,7 @@ import type {
 import type { AccountRecord } from '../account/account.repository.js';
 import { AlertScheduler } from '../alert/alert.scheduler.js';
 import { fieldError } from '../common/validation.js';
+import { PhotoTrash } from '../photo/photo.trash.js';
 import { toCulture } from './culture.mapper.js';
 import { CultureRepository, type CultureRow, type ParentProblem } from './culture.repository.js';
 
@@ -26,6 +27,7 @@ export class CultureService {
   constructor(
     private readonly cultures: CultureRepository,
     private readonly alerts: AlertScheduler,
+    private readonly photoTrash: PhotoTrash,
   ) {}
 
   /** The account's culture, or 404 — also for another account's id, so ids reveal nothing. */
@@ -64,5 +66,7 @@ export class CultureService {
 
   async delete(account: AccountRecord, id: string): Promise<void> {
     if (!(await this.cultures.delete(account.id, id))) throw new NotFoundException('No culture with this id.');
+    // Its feedings' photos went with it; their images leave the bucket now.
+    await this.photoTrash.empty();
   }
 }

@@ -10,6 +10,7 @@ import type { AccountRecord } from '../account/account.repository.js';
 import { AlertScheduler } from '../alert/alert.scheduler.js';
 import { fieldError } from '../common/validation.js';
 import { CultureService } from '../culture/culture.service.js';
+import { PhotoTrash } from '../photo/photo.trash.js';
 import { requestedGrams } from './feeding.amounts.js';
 import { toFeeding } from './feeding.mapper.js';
 import { FeedingRepository, type FeedingRow } from './feeding.repository.js';
@@ -20,6 +21,7 @@ export class FeedingService {
     private readonly feedings: FeedingRepository,
     private readonly cultures: CultureService,
     private readonly alerts: AlertScheduler,
+    private readonly photoTrash: PhotoTrash,
   ) {}
 
   /** The account's feeding, or 404 — also for another account's id. */
@@ -92,6 +94,8 @@ export class FeedingService {
   async delete(account: AccountRecord, id: string): Promise<void> {
     const { cultureId } = await this.requireOwned(account, id);
     if (!(await this.feedings.delete(account.id, id))) throw new NotFoundException('No feeding with this id.');
+    // Its photos' rows went with it; their images leave the bucket now.
+    await this.photoTrash.empty();
     // Its alerts went with it (ON DELETE CASCADE); the previous feeding may want some again.
     await this.alerts.refreshCulture(cultureId);
   }

@@ -9,6 +9,7 @@ import type { AccountRecord } from '../account/account.repository.js';
 import { AlertScheduler } from '../alert/alert.scheduler.js';
 import { requireNotBeforeFeeding } from '../feeding/feeding-time.js';
 import { FeedingService } from '../feeding/feeding.service.js';
+import { PhotoTrash } from '../photo/photo.trash.js';
 import { toRiseCheck } from './rise-check.mapper.js';
 import { RiseCheckRepository, type OwnedRiseCheck } from './rise-check.repository.js';
 import { requestedHeightMm } from './rise-check.height.js';
@@ -19,6 +20,7 @@ export class RiseCheckService {
     private readonly checks: RiseCheckRepository,
     private readonly feedings: FeedingService,
     private readonly alerts: AlertScheduler,
+    private readonly photoTrash: PhotoTrash,
   ) {}
 
   private async requireOwned(account: AccountRecord, id: string): Promise<OwnedRiseCheck> {
@@ -65,6 +67,7 @@ export class RiseCheckService {
   async delete(account: AccountRecord, id: string): Promise<void> {
     const { feedingId } = await this.requireOwned(account, id);
     if (!(await this.checks.delete(account.id, id))) throw new NotFoundException('No rise check with this id.');
+    await this.photoTrash.empty();
     await this.alerts.refreshFeeding(feedingId);
   }
 }
