@@ -80,6 +80,10 @@ function createAppRouter() {
                   lazy: async () => ({ Component: (await import('./routes/feeding')).FeedingRoute }),
                 },
                 {
+                  path: 'feedings/:id/temperatures/import',
+                  lazy: async () => ({ Component: (await import('./routes/logger-import')).LoggerImportRoute }),
+                },
+                {
                   path: 'bench',
                   children: [
                     {

@@ -1,5 +1,6 @@
 import { formatTemperature, type Account, type Feeding, type TemperatureReading } from '@peakwise/shared';
 import DeleteOutlined from '@mui/icons-material/DeleteOutlined';
+import Button from '@mui/material/Button';
 import Card from '@mui/material/Card';
 import CardContent from '@mui/material/CardContent';
 import IconButton from '@mui/material/IconButton';
@@ -10,6 +11,7 @@ import TableHead from '@mui/material/TableHead';
 import TableRow from '@mui/material/TableRow';
 import Typography from '@mui/material/Typography';
 import { useState } from 'react';
+import { Link as RouterLink } from 'react-router-dom';
 import { LoadError } from '@/components/feedback/load-error';
 import { VisuallyHidden } from '@/components/visually-hidden';
 import { useDeleteTemperature } from '../api/delete-temperature';
@@ -70,6 +72,9 @@ export function TemperaturesCard({ feeding, account }: { feeding: Feeding; accou
           </Table>
         )}
         <TemperatureEntryForm feedingId={feeding.id} account={account} />
+        <Button component={RouterLink} to={`/feedings/${feeding.id}/temperatures/import`} sx={{ mt: 1 }}>
+          Import logger file
+        </Button>
       </CardContent>
       <DeleteConfirm
         entry={deleting}
