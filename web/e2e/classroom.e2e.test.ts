@@ -80,7 +80,7 @@ describe('the instructor’s class', () => {
 
   it(
     'creates a class, students join by code, sluggish first finds Pip, and its culture opens read-only',
-    { timeout: 150_000 },
+    { timeout: 240_000 },
     async () => {
       const base = baseUrl();
       const desk = await launchBrowser(DESKTOP);
@@ -159,6 +159,23 @@ describe('the instructor’s class', () => {
       const csv = await page.request.get(`${base}${csvHref}`);
       expect(csv.status()).toBe(200);
       expect((await csv.text()).split('\r\n')[1]).toContain('Dev Rowan,Pip');
+
+      // Invitations: a stray word is caught in the form; two addresses get a link each; one is revoked.
+      const box = page.getByLabel('E-mail addresses');
+      await box.fill('first.baker@example.test, amara');
+      await page.getByRole('button', { name: 'Send invitations' }).click();
+      await page.getByText('Not an e-mail address: amara').waitFor();
+      await box.fill('first.baker@example.test\nSecond Baker <second.baker@example.test>');
+      await page.getByRole('button', { name: 'Send invitations' }).click();
+      await page.getByText('2 invitations sent.').waitFor();
+      const invites = page.getByRole('list', { name: 'Invitations' });
+      await invites.getByText('second.baker@example.test').waitFor();
+      const firstInvite = invites.getByRole('listitem').filter({ hasText: 'first.baker@example.test' });
+      await firstInvite.getByRole('button', { name: 'Revoke' }).click();
+      await page.getByRole('dialog').getByRole('button', { name: 'Revoke' }).click();
+      await firstInvite.getByText('Revoked').waitFor();
+      await invites.scrollIntoViewIfNeeded();
+      await page.screenshot({ path: join(RESULTS_DIR, 'classroom-invites-desktop.png') });
 
       // A row opens the student's culture, read-only, with the student's charts.
       await first.getByRole('link', { name: 'Pip' }).click();

@@ -10,7 +10,7 @@ import { useMemo } from 'react';
 import { Link as RouterLink } from 'react-router-dom';
 import { LoadError } from '@/components/feedback/load-error';
 import { useProgress } from '../api/get-progress';
-import { progressChart, weekLabel } from '../utils/progress-chart';
+import { progressChart, weekLabel, weekTicks } from '../utils/progress-chart';
 import { hoursText } from '../utils/roster-words';
 
 // Our palette first (slate, amber, crust, grey-teal), then further colours far enough apart to tell a
@@ -39,6 +39,7 @@ export function ClassChartCard({
     () => (progress.data ? progressChart(progress.data.series, startsOn) : null),
     [progress.data, startsOn],
   );
+  const ticks = chart ? weekTicks(chart.grid) : [];
   const reference = `${formatTemperature(REFERENCE_TEMPERATURE_C, account.temperatureUnit)}, 1:1:1`;
 
   return (
@@ -71,9 +72,10 @@ export function ClassChartCard({
                     data: chart.grid,
                     scaleType: 'linear',
                     min: 0,
+                    max: ticks.at(-1),
+                    tickInterval: ticks,
                     label: 'weeks since the class started',
-                    valueFormatter: (v: number, context) =>
-                      context.location === 'tick' ? String(Math.round(v * 10) / 10) : weekLabel(v),
+                    valueFormatter: (v: number, context) => (context.location === 'tick' ? String(v) : weekLabel(v)),
                   },
                 ]}
                 yAxis={[{ min: 0, label: `hours to peak at ${reference}` }]}

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { progressChart, weekLabel } from './progress-chart';
+import { progressChart, weekLabel, weekTicks } from './progress-chart';
 
 describe('the class chart’s data', () => {
   const series = [
@@ -47,5 +47,11 @@ describe('the class chart’s data', () => {
   it('counts weeks from 1', () => {
     expect(weekLabel(0)).toBe('week 1');
     expect(weekLabel(2.4)).toBe('week 3');
+  });
+
+  it('ticks half weeks while the class is young, whole weeks later', () => {
+    expect(weekTicks([0.25, 1.1])).toEqual([0, 0.5, 1, 1.5]);
+    expect(weekTicks([0, 4.2])).toEqual([0, 1, 2, 3, 4, 5]);
+    expect(weekTicks([])).toEqual([0]);
   });
 });

@@ -55,3 +55,12 @@ export function progressChart(series: readonly ClassProgressSeries[], startsOn: 
 export function weekLabel(weeks: number): string {
   return `week ${Math.floor(weeks) + 1}`;
 }
+
+/** Ticks on whole weeks, or half weeks while the class is young, from the start to past the last point. */
+export function weekTicks(grid: readonly number[]): number[] {
+  const last = grid.length > 0 ? Math.max(...grid) : 0;
+  const step = last < 3 ? 0.5 : 1;
+  const ticks: number[] = [];
+  for (let t = 0; t <= Math.ceil(last / step) * step + 1e-9; t += step) ticks.push(Math.round(t * 10) / 10);
+  return ticks;
+}
