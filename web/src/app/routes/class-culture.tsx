@@ -69,7 +69,13 @@ function ClassCulture({ classId, cultureId }: { classId: string; cultureId: stri
       />
       {summary.data?.running && <RunningRiseCard running={summary.data.running} account={account} now={now} />}
       <RiseOverlayCard cultureId={cultureId} account={account} source={source} />
-      {summary.data && <KineticsCard kinetics={summary.data.kinetics} unit={account.temperatureUnit} />}
+      {summary.data && (
+        <KineticsCard
+          kinetics={summary.data.kinetics}
+          unit={account.temperatureUnit}
+          whose={row ? `${row.studentName}’s` : 'the student’s'}
+        />
+      )}
       <ClassFeedingsCard classId={classId} cultureId={cultureId} account={account} />
       {row && (
         <StudentBakesCard classId={classId} studentId={row.studentId} studentName={row.studentName} account={account} />

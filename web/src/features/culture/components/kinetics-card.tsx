@@ -15,7 +15,16 @@ import {
 import { basisWords, kineticsSentence, trendWords } from '../utils/kinetics-words';
 
 /** How this culture answers to temperature: the sentence, then time to peak against temperature. */
-export function KineticsCard({ kinetics, unit }: { kinetics: CultureKineticsSummary; unit: TemperatureUnit }) {
+export function KineticsCard({
+  kinetics,
+  unit,
+  whose = 'your',
+}: {
+  kinetics: CultureKineticsSummary;
+  unit: TemperatureUnit;
+  /** Whose feedings the dots are: "your", or "Dev Rowan’s" when an instructor reads a student's culture. */
+  whose?: string;
+}) {
   const theme = useTheme();
   const t = (c: number) => (unit === 'F' ? celsiusToFahrenheit(c) : c);
   const curve = [...kinetics.hoursToPeakAt].sort((a, b) => a.temperatureC - b.temperatureC);
@@ -32,7 +41,7 @@ export function KineticsCard({ kinetics, unit }: { kinetics: CultureKineticsSumm
     {
       type: 'scatter',
       id: 'observed',
-      label: 'Your feedings',
+      label: `${whose.charAt(0).toUpperCase()}${whose.slice(1)} feedings`,
       color: theme.palette.secondary.dark,
       data: kinetics.observations.map((o, i) => ({ id: i, x: t(o.temperatureC), y: o.hoursToPeak })),
       valueFormatter: (v) => (v ? `${v.y.toFixed(1)} h at ${v.x.toFixed(0)} °${unit}` : ''),
@@ -52,7 +61,7 @@ export function KineticsCard({ kinetics, unit }: { kinetics: CultureKineticsSumm
         </Typography>
         {curve.length > 1 && (
           <Typography variant="body2" color="text.secondary" sx={{ mt: 1 }}>
-            The line is a 1:1:1 feeding at each temperature; the dots are your finished feedings, at their own ratio.
+            The line is a 1:1:1 feeding at each temperature; the dots are {whose} finished feedings, at their own ratio.
           </Typography>
         )}
         {curve.length > 1 && (
