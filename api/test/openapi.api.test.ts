@@ -68,6 +68,12 @@ it('documents every route under /api', async () => {
       '/api/plans/{id}/readings/{readingId}',
       '/api/plans/{id}/steps/{stepId}/done',
       '/api/rise-checks/{id}',
+      '/api/feedings/{feedingId}/photos',
+      '/api/rise-checks/{riseCheckId}/photos',
+      '/api/plans/{planId}/photos',
+      '/api/cultures/{cultureId}/photos',
+      '/api/photos/{photoId}',
+      '/api/photos/{photoId}/{variant}',
       '/api/temperatures/{id}',
     ].sort(),
   );
