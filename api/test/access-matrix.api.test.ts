@@ -3,7 +3,9 @@ import { buildWorld, type World } from './access-matrix.fixtures.js';
 import { ROLES } from './access-matrix.model.js';
 import { newTally, runRoute } from './access-matrix.runner.js';
 import { MATRIX, NOT_IN_MATRIX } from './access-matrix.table.js';
-import { createTestApp, resetDatabase, type TestApp } from './test-app.js';
+import { openDatabase } from '../src/db/database.js';
+import { startTestBucket, storageConfig, type TestBucket } from './s3-fixture.js';
+import { createTestApp, resetDatabase, testConfig, type TestApp } from './test-app.js';
 
 // The authorisation matrix: every route the app registers × anonymous, baker A, baker B, the
 // instructor of A's class, an instructor of another class and an admin × A's and B's objects
@@ -11,24 +13,27 @@ import { createTestApp, resetDatabase, type TestApp } from './test-app.js';
 // baker's ids or names unless the route may show them. Refused requests must write nothing.
 
 let t: TestApp;
+let bucket: TestBucket;
 let world: World;
 /** "METHOD /path" of every route, as Fastify registered it (collected while the app starts). */
 const registered = new Set<string>();
 const tally = newTally();
 
 beforeAll(async () => {
-  t = await createTestApp(
-    {},
-    {
-      beforeConfigure: (fastify) =>
-        fastify.addHook('onRoute', (route) => {
-          for (const method of [route.method].flat()) registered.add(`${method} ${route.url}`);
-        }),
-    },
-  );
-  await resetDatabase(t.db);
+  // Emptied before the app starts: on start it queues a job for every open alert delivery, and
+  // earlier runs leave thousands of them.
+  const handle = openDatabase(testConfig().databaseUrl, 1);
+  await resetDatabase(handle.db);
+  await handle.db.destroy();
+  bucket = await startTestBucket();
+  t = await createTestApp(storageConfig(bucket), {
+    beforeConfigure: (fastify) =>
+      fastify.addHook('onRoute', (route) => {
+        for (const method of [route.method].flat()) registered.add(`${method} ${route.url}`);
+      }),
+  });
   world = await buildWorld(t);
-}, 60_000);
+}, 180_000);
 
 afterAll(async () => {
   const roles = tally.roles.size;
@@ -44,6 +49,7 @@ afterAll(async () => {
     ].join('\n'),
   );
   await t?.close();
+  await bucket?.stop();
 });
 
 /** HEAD answers through its GET's handler and guard (Fastify adds it), so the GET stands for both. */
@@ -64,7 +70,8 @@ describe('the access matrix', () => {
   });
 
   for (const [key, route] of Object.entries(MATRIX)) {
-    it(`${key}: ${route.access.name}`, async () => {
+    // Generous: on a busy machine one route's dozen requests can take seconds.
+    it(`${key}: ${route.access.name}`, { timeout: 120_000 }, async () => {
       const before = {
         mismatches: tally.mismatches.length,
         leaks: tally.leaks.length,

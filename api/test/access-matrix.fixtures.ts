@@ -1,7 +1,8 @@
 import { createHash, randomBytes, randomUUID } from 'node:crypto';
 import type { BakePlanView, CheckedStep, Culture, DoughReading, Feeding, Formula, RiseCheck } from '@peakwise/shared';
-import type { TemperatureReadingBatchResponse } from '@peakwise/shared';
+import type { PhotoUploadResponse, TemperatureReadingBatchResponse } from '@peakwise/shared';
 import { COUNTRY_LOAF, planBody } from './bake-plan.fixtures.js';
+import { image, multipart } from './photo.fixtures.js';
 import { created, makeAdmin, send, signInCookie, signUp, type SignedUp } from './helpers.js';
 import {
   PARTIES,
@@ -9,17 +10,17 @@ import {
   type Caller,
   type MarkerKind,
   type ObjectSet,
+  OWNER_OF,
   type Party,
+  type Person,
   type Relation,
   type RoleName,
 } from './access-matrix.model.js';
-import { shareThroughClasses } from './access-matrix.classroom.js';
+import { classroomObjects, enrolInClasses, type ClassRef } from './access-matrix.classroom.js';
 import type { TestApp } from './test-app.js';
 
 // The people and objects of the matrix. Names follow the invented Larkspur class of PRODUCT.md:
 // Theo (baker A) keeps "Bramble", Amara (baker B) keeps "Old Copper"; Ines teaches A's class.
-
-type Person = Exclude<RoleName, 'anonymous'>;
 
 const PEOPLE: Record<Person, string> = {
   bakerA: 'Theo Park',
@@ -29,9 +30,19 @@ const PEOPLE: Record<Person, string> = {
   admin: 'Hal Okafor',
 };
 
-const PARTY_DATA: Record<Party, { owner: Person; culture: string; formula: string; note: string }> = {
-  A: { owner: 'bakerA', culture: 'Bramble', formula: 'Theo’s country loaf', note: 'Theo: smelled of acetone' },
-  B: { owner: 'bakerB', culture: 'Old Copper', formula: 'Amara’s rye tin', note: 'Amara: fed with whole rye' },
+const PARTY_DATA: Record<Party, { culture: string; formula: string; note: string; comment: string }> = {
+  A: {
+    culture: 'Bramble',
+    formula: 'Theo’s country loaf',
+    note: 'Theo: smelled of acetone',
+    comment: 'Theo asks: is a 4 h peak too fast?',
+  },
+  B: {
+    culture: 'Old Copper',
+    formula: 'Amara’s rye tin',
+    note: 'Amara: fed with whole rye',
+    comment: 'Amara asks: why so flat today?',
+  },
 };
 
 const HOUR = 3_600_000;
@@ -47,15 +58,13 @@ export interface World {
   markers: Record<Party, Record<MarkerKind, Set<string>>>;
   /** An account outside the matrix, for the password-reset routes (they act on an e-mail, not a session). */
   spare: SignedUp;
-}
-
-export function ownerOf(party: Party): Person {
-  return PARTY_DATA[party].owner;
+  /** The class each party is a member of (access-matrix.classroom.ts). */
+  classes: Record<Party, ClassRef>;
 }
 
 export function relationOf(world: World, role: RoleName, party: Party): Relation | null {
   if (role === 'anonymous') return null;
-  if (role === ownerOf(party)) return 'owned';
+  if (role === OWNER_OF[party]) return 'owned';
   return world.sharedWith[party].includes(role) ? 'shared' : 'foreign';
 }
 
@@ -82,8 +91,9 @@ export async function buildWorld(t: TestApp): Promise<World> {
   ) as Record<RoleName, Caller>;
   const markers = Object.fromEntries(
     PARTIES.map((party) => {
-      const a = accounts[ownerOf(party)];
-      const logbook = [PARTY_DATA[party].culture, PARTY_DATA[party].formula, PARTY_DATA[party].note];
+      const a = accounts[OWNER_OF[party]];
+      const { culture, formula, note, comment } = PARTY_DATA[party];
+      const logbook = [culture, formula, note, comment];
       return [party, { account: new Set([a.account.id, a.email, a.displayName]), logbook: new Set(logbook) }];
     }),
   ) as World['markers'];
@@ -96,8 +106,9 @@ export async function buildWorld(t: TestApp): Promise<World> {
     sharedWith: { A: [], B: [] },
     markers,
     spare: await signUp(t.app, { displayName: 'Wren Abbott' }),
+    classes: { A: { id: '', joinCode: '' }, B: { id: '', joinCode: '' } },
   };
-  world.sharedWith = await shareThroughClasses(world);
+  await enrolInClasses(world);
   return world;
 }
 
@@ -122,6 +133,14 @@ export async function mintResetToken(world: World): Promise<string> {
   return token;
 }
 
+let jpeg: Promise<Buffer> | undefined;
+
+/** A multipart body with one small JPEG, as the photo uploader sends it. */
+export async function jarPhotoForm(): Promise<{ payload: Buffer; headers: Record<string, string> }> {
+  jpeg ??= image('jpeg', 120, 90);
+  return multipart([{ filename: 'jar.jpg', contentType: 'image/jpeg', data: await jpeg }]);
+}
+
 /** New objects for both parties (routes that write get their own, so no route depends on another's effects). */
 export async function freshObjects(world: World): Promise<Record<Party, ObjectSet>> {
   const [a, b] = await Promise.all(PARTIES.map((party) => objectsOf(world, party)));
@@ -130,8 +149,8 @@ export async function freshObjects(world: World): Promise<Record<Party, ObjectSe
 
 async function objectsOf(world: World, party: Party): Promise<ObjectSet> {
   const { t } = world;
-  const owner = world.callers[ownerOf(party)];
-  const accountId = world.accountIds[ownerOf(party)];
+  const owner = world.callers[OWNER_OF[party]];
+  const accountId = world.accountIds[OWNER_OF[party]];
   const data = PARTY_DATA[party];
   const call = (method: 'POST', url: string, payload: unknown) => send(t.app, method, url, owner.cookie, payload);
   const now = Date.now();
@@ -183,8 +202,23 @@ async function objectsOf(world: World, party: Party): Promise<ObjectSet> {
     .returning('id')
     .executeTakeFirstOrThrow();
 
+  const upload = await jarPhotoForm();
+  const photos = await created<PhotoUploadResponse>(
+    t.app.inject({
+      method: 'POST',
+      url: `/api/feedings/${feeding.id}/photos`,
+      payload: upload.payload,
+      headers: { cookie: owner.cookie!, ...upload.headers },
+    }),
+  );
+  const photoId = photos.items[0]!.id;
+  const extras = await classroomObjects(world, party, { feedingId: feeding.id, comment: data.comment });
+  const ids = [check.id, temperatures.items[0]!.id, reading.id, alert.id, culture.id, feeding.id, formula.id, plan.id];
+  ids.push(extras.commentId, extras.pushDeviceId, photoId);
+  for (const id of ids) world.markers[party].logbook.add(id);
   const objects: ObjectSet = {
     party,
+    via: 'own class',
     accountId,
     cultureId: culture.id,
     feedingId: feeding.id,
@@ -195,8 +229,8 @@ async function objectsOf(world: World, party: Party): Promise<ObjectSet> {
     checkedStepId: checked.stepId,
     planReadingId: reading.id,
     alertId: alert.id,
+    photoId,
+    ...extras,
   };
-  const ids = [check.id, temperatures.items[0]!.id, reading.id, alert.id, culture.id, feeding.id, formula.id, plan.id];
-  for (const id of ids) world.markers[party].logbook.add(id);
   return objects;
 }

@@ -8,6 +8,10 @@ export type RoleName = (typeof ROLES)[number];
 /** The owners of the objects a route is tried on: baker A's and baker B's. */
 export const PARTIES = ['A', 'B'] as const;
 export type Party = (typeof PARTIES)[number];
+export type Person = Exclude<RoleName, 'anonymous'>;
+export const OWNER_OF: Record<Party, Person> = { A: 'bakerA', B: 'bakerB' };
+/** The instructor of the class each party is a member of (access-matrix.classroom.ts). */
+export const INSTRUCTOR_OF: Record<Party, Person> = { A: 'instructorA', B: 'instructorOther' };
 
 /**
  * How a caller stands to an object: its owner; an instructor whose class the owner belongs to
@@ -39,6 +43,13 @@ export function outcomeOf(status: number): Outcome | 'other' {
  */
 export interface ObjectSet {
   party: Party;
+  /**
+   * The class in the ids below: the party's own (its instructor reads its logs through it), or the
+   * other party's, to ask for a log through a class its owner is not in.
+   */
+  via: 'own class' | 'other class';
+  classId: string;
+  joinCode: string;
   accountId: string;
   cultureId: string;
   feedingId: string;
@@ -50,6 +61,14 @@ export interface ObjectSet {
   checkedStepId: string;
   planReadingId: string;
   alertId: string;
+  /** A comment by the owner on the feeding. */
+  commentId: string;
+  /** A pending invitation to the class, to someone else; and a live link addressed to the owner. */
+  inviteId: string;
+  inviteToken: string;
+  pushDeviceId: string;
+  /** A jar photo of the feeding. */
+  photoId: string;
 }
 
 /** Who a request is sent as. */
@@ -96,7 +115,38 @@ export const OWNER_OR_SHARED = signedIn('owner or class instructor', (_role, rel
   relation === 'owned' || relation === 'shared' ? 'ok' : 'hidden',
 );
 
-/** An instructor's read of a student's log: the class's instructor only (the owner has their own routes). */
-export const SHARED_ONLY = signedIn('class instructor only', (_role, relation) =>
-  relation === 'shared' ? 'ok' : 'hidden',
+/** A policy spelled out per relation, for the classroom's mixes of 403 and 404. */
+function byRelation(name: string, outcomes: Record<Relation, Outcome>): Policy {
+  return signedIn(name, (_role, relation) => outcomes[relation ?? 'foreign']);
+}
+
+/**
+ * The class's instructor only. Their student (the owner of the logs, a member) is told no (403:
+ * they know the class); anyone else gets 404. Through a class the owner is not in, all is foreign.
+ */
+export const CLASS_INSTRUCTOR = byRelation('class instructor', { shared: 'ok', owned: 'forbidden', foreign: 'hidden' });
+
+/** The class's instructor and its current members see the class; others get 404. */
+export const CLASS_MEMBERS = byRelation('class instructor or member', { shared: 'ok', owned: 'ok', foreign: 'hidden' });
+
+/** Something the owner does alone, that the instructor who can see it may not (403), e.g. leaving, deleting their comment. */
+export const OWNER_NOT_INSTRUCTOR = byRelation('owner; instructor told no', {
+  owned: 'ok',
+  shared: 'forbidden',
+  foreign: 'hidden',
+});
+
+/** A link addressed to the owner: it works for them alone; anyone else signed in is told no. */
+export const ADDRESSEE_ONLY = byRelation('addressee only', { owned: 'ok', shared: 'forbidden', foreign: 'forbidden' });
+
+/** A join code is the authority: anyone signed in may use it, except the class's own instructor (403). */
+export const CODE_HOLDER = byRelation('any code holder but the instructor', {
+  owned: 'ok',
+  shared: 'forbidden',
+  foreign: 'ok',
+});
+
+/** Instructor and admin accounts (by role, not by class); bakers are told no. */
+export const INSTRUCTOR_ROLE = signedIn('instructor or admin role', (role) =>
+  role === 'instructorA' || role === 'instructorOther' || role === 'admin' ? 'ok' : 'forbidden',
 );

@@ -76,6 +76,7 @@ export const BENCH_ROUTES: Record<string, MatrixRoute> = {
     access: OWNER_ONLY,
     on: 'objects',
     path: plan('/finish'),
+    spoils: 'objects',
     body: () => ({ notes: 'Open crumb, a little pale', rating: 4 }),
   },
 };

@@ -1,6 +1,8 @@
+import { pushSubscription } from './access-matrix.classroom.js';
 import { BENCH_ROUTES } from './access-matrix.table-bench.js';
 import { CLASSROOM_ROUTES } from './access-matrix.table-classroom.js';
 import { LOGBOOK_ROUTES } from './access-matrix.table-logbook.js';
+import { PHOTO_ROUTES } from './access-matrix.table-photo.js';
 import { PASSWORD } from './helpers.js';
 import {
   ADMIN_ONLY,
@@ -33,14 +35,23 @@ export interface MatrixRoute {
   /**
    * `objects`: tried on baker A's and on baker B's objects (the path or the body names them), so
    * each role meets an object it owns, one shared with it, or a foreign one. `caller`: tried once;
-   * the route acts on the caller's own account or makes something new.
+   * the route acts on the caller's own account or makes something new. `class-logs`: as objects,
+   * and also each party's log asked through the other party's class (an instructor's own class
+   * with someone else's culture id must not open it).
    */
-  on: 'objects' | 'caller';
+  on: 'objects' | 'class-logs' | 'caller';
   path: string | ((o: ObjectSet) => string);
   /** A valid body, so a refused write is refused for access and not for a missing field. */
   body?: (o: ObjectSet, ctx: BodyContext) => unknown;
+  /** Sent as a multipart upload of one small JPEG (the photos field), instead of a JSON body. */
+  upload?: true;
   /** `throwaway`: sent in a second session of the caller, as the route ends or replaces its session. */
   session?: 'throwaway';
+  /**
+   * What the route leaves unusable for the next (DELETE routes always do): `objects` are made
+   * anew; `classes`: it changes who is in which class, so the classes are started over too.
+   */
+  spoils?: 'objects' | 'classes';
   /** What of another baker's data a 2xx may carry: to the instructor it is shared with, to an admin. */
   reveals?: { shared?: MarkerKind[]; admin?: MarkerKind[] };
 }
@@ -122,7 +133,13 @@ const ACCOUNT_ROUTES: Record<string, MatrixRoute> = {
     body: () => ({ leadMinutes: 30 }),
   },
 
-  'GET /api/alerts': { access: SIGNED_IN, on: 'caller', path: '/api/alerts' },
+  // A student's comment reaches their instructor as an alert naming the student and the culture.
+  'GET /api/alerts': {
+    access: SIGNED_IN,
+    on: 'caller',
+    path: '/api/alerts',
+    reveals: { shared: ['account', 'logbook'] },
+  },
   'GET /api/alerts/unread-count': { access: SIGNED_IN, on: 'caller', path: '/api/alerts/unread-count' },
   'POST /api/alerts/read-all': { access: SIGNED_IN, on: 'caller', path: '/api/alerts/read-all' },
   'POST /api/alerts/:id/read': { access: OWNER_ONLY, on: 'objects', path: (o) => `/api/alerts/${o.alertId}/read` },
@@ -143,9 +160,33 @@ const ACCOUNT_ROUTES: Record<string, MatrixRoute> = {
   },
 };
 
+// Web push: the key is the same for everyone signed in; a device belongs to its account alone.
+const PUSH_ROUTES: Record<string, MatrixRoute> = {
+  'GET /api/push/key': { access: SIGNED_IN, on: 'caller', path: '/api/push/key' },
+  'GET /api/push/subscriptions': { access: SIGNED_IN, on: 'caller', path: '/api/push/subscriptions' },
+  'POST /api/push/subscriptions': {
+    access: SIGNED_IN,
+    on: 'caller',
+    path: '/api/push/subscriptions',
+    body: () => pushSubscription(),
+  },
+  'DELETE /api/push/subscriptions/:id': {
+    access: OWNER_ONLY,
+    on: 'objects',
+    path: (o) => `/api/push/subscriptions/${o.pushDeviceId}`,
+  },
+  'POST /api/push/subscriptions/:id/test': {
+    access: OWNER_ONLY,
+    on: 'objects',
+    path: (o) => `/api/push/subscriptions/${o.pushDeviceId}/test`,
+  },
+};
+
 export const MATRIX: Record<string, MatrixRoute> = {
   ...ACCOUNT_ROUTES,
   ...LOGBOOK_ROUTES,
   ...BENCH_ROUTES,
   ...CLASSROOM_ROUTES,
+  ...PUSH_ROUTES,
+  ...PHOTO_ROUTES,
 };
