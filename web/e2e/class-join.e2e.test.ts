@@ -97,6 +97,9 @@ describe('joining a class and its comments', () => {
     await s.goto(`${base}/feedings/${feedingId}`);
     await s.getByRole('heading', { name: 'Rise checks' }).waitFor();
     expect(await s.getByRole('heading', { name: 'Comments from your class' }).count()).toBe(0);
+    // Signed out on the server, so a late response re-setting the cookie cannot sign the student back in.
+    await s.goto('about:blank');
+    expect((await s.request.post(`${base}/api/auth/sign-out`)).status()).toBe(204);
     await s.context().clearCookies();
 
     // The instructor makes a class and invites the student.
@@ -215,6 +218,10 @@ describe('joining a class and its comments', () => {
     await t.screenshot({ path: join(RESULTS_DIR, 'class-plan-desktop.png'), fullPage: true });
     await t.setViewportSize(PHONE);
     await t.screenshot({ path: join(RESULTS_DIR, 'class-plan-phone.png'), fullPage: true });
+    await t.getByRole('link', { name: 'Go to the comments' }).click();
+    await expect.poll(() => t.getByTestId('comment').filter({ hasText: 'second fold' }).isVisible()).toBe(true);
+    await settled(t);
+    await t.screenshot({ path: join(RESULTS_DIR, 'class-plan-comments-phone.png') });
     await s.goto(`${base}/bench/${plan.id}`);
     const bakeThread = s.getByRole('region', { name: 'Comments from your class' });
     await bakeThread.getByTestId('comment').filter({ hasText: 'second fold' }).getByText('Instructor').waitFor();

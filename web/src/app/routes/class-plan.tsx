@@ -58,7 +58,9 @@ export function ClassPlanRoute() {
         Read-only: shared with you as this class’s instructor.{' '}
         <Link component={RouterLink} to={`/classes/${classId}`}>
           Back to the class
-        </Link>
+        </Link>{' '}
+        · {/* On a phone the thread sits below the whole timeline. */}
+        <Link href="#comments">Go to the comments</Link>
       </Alert>
       {p.status === 'finished' && (p.rating !== null || p.notes) && (
         <Card>
@@ -93,6 +95,7 @@ export function ClassPlanRoute() {
           <BulkCard plan={p} account={account} clock={clock} now={now} active={false} />
           <CommentThread
             key={p.id}
+            id="comments"
             subject={{ type: 'bake-plan', id: p.id }}
             timeZone={account.timeZone}
             heading="Comments"

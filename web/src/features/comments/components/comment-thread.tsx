@@ -20,10 +20,12 @@ interface Props {
   emptyText: string;
   /** The reply box's label. */
   formLabel: string;
+  /** An anchor for a "Go to the comments" link on a long page. */
+  id?: string;
 }
 
 /** A conversation on one feeding or bake: oldest first, polled while open, with a reply box. */
-export function CommentThread({ subject, timeZone, heading, emptyText, formLabel }: Props) {
+export function CommentThread({ subject, timeZone, heading, emptyText, formLabel, id }: Props) {
   const headingId = useId();
   const comments = useComments(subject);
   const now = useNow();
@@ -31,7 +33,7 @@ export function CommentThread({ subject, timeZone, heading, emptyText, formLabel
   const items = comments.data?.items ?? [];
 
   return (
-    <Card component="section" aria-labelledby={headingId}>
+    <Card component="section" aria-labelledby={headingId} id={id} sx={{ scrollMarginTop: 72 }}>
       <CardContent>
         <Typography variant="h2" id={headingId} gutterBottom>
           {heading}
