@@ -60,6 +60,8 @@ export interface MatrixRoute {
 export const NOT_IN_MATRIX: Record<string, string> = {
   'GET /api/dev/mail':
     'development mailbox: loaded only outside production (config.ts); public by design and reads the fake SMTP server, no database rows',
+  'GET /api/dev/push':
+    'development push inbox: loaded only when the fake push service is configured (never in production or these tests)',
   'GET /api/docs':
     'Swagger UI of the OpenAPI document: static, public, no rows (openapi.api.test.ts checks the document)',
   'GET /api/docs/': 'Swagger UI, as above',
