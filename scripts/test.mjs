@@ -206,7 +206,11 @@ try {
         rmSync(s3Dir, { recursive: true, force: true });
         fakeS3 = await startFakeS3({ port: smtpPort + 3, directory: s3Dir, quiet: true });
         await startServer(databaseUrl, port, fakeMail, fakePush, fakeS3);
-        return vitest('e2e', 'web', ['--config', 'vitest.e2e.config.ts'], { E2E_BASE_URL: `http://127.0.0.1:${port}` });
+        // DATABASE_URL: a few browser tests set up what no route offers (e.g. an instructor role).
+        return vitest('e2e', 'web', ['--config', 'vitest.e2e.config.ts'], {
+          E2E_BASE_URL: `http://127.0.0.1:${port}`,
+          DATABASE_URL: databaseUrl,
+        });
       });
     }
   }

@@ -22,6 +22,10 @@ const PAGE_SIZE = 20;
 
 const OPEN_LABEL: Record<Alert['subjectType'], string> = { culture: 'Open culture', 'bake-plan': 'Open bake plan' };
 
+/** A comment is news, not a reminder: it leads to its thread and says when it came. */
+const openLabel = (alert: Alert) => (alert.kind === 'comment' ? 'Open the comments' : OPEN_LABEL[alert.subjectType]);
+const whenLabel = (alert: Alert) => (alert.kind === 'comment' ? 'Sent' : 'Due');
+
 function AlertCard({ alert, timeZone, now }: { alert: Alert; timeZone: string; now: Date }) {
   const markRead = useMarkAlertRead();
   const unread = alert.readAt === null;
@@ -36,7 +40,7 @@ function AlertCard({ alert, timeZone, now }: { alert: Alert; timeZone: string; n
         <Stack direction="row" spacing={1} sx={{ alignItems: 'center' }}>
           {unread && <Chip label="New" color="secondary" size="small" />}
           <Typography variant="body2" color="text.secondary">
-            Due {formatClock(alert.dueAt, timeZone, now)}
+            {whenLabel(alert)} {formatClock(alert.dueAt, timeZone, now)}
           </Typography>
         </Stack>
         <Typography variant="h3" component="h2">
@@ -46,7 +50,7 @@ function AlertCard({ alert, timeZone, now }: { alert: Alert; timeZone: string; n
       </CardContent>
       <CardActions sx={{ px: 2, pb: 2, gap: 1, flexWrap: 'wrap' }}>
         <Button component={RouterLink} to={alert.linkPath} variant="outlined" size="small">
-          {OPEN_LABEL[alert.subjectType]}
+          {openLabel(alert)}
         </Button>
         {unread && (
           <Button size="small" onClick={() => markRead.mutate(alert.id)} disabled={markRead.isPending}>
