@@ -1,6 +1,6 @@
 import { createHash, randomBytes, randomUUID } from 'node:crypto';
 import type { BakePlanView, CheckedStep, Culture, DoughReading, Feeding, Formula, RiseCheck } from '@peakwise/shared';
-import type { PhotoUploadResponse, TemperatureReadingBatchResponse } from '@peakwise/shared';
+import { ALERT_KINDS, type PhotoUploadResponse, type TemperatureReadingBatchResponse } from '@peakwise/shared';
 import { COUNTRY_LOAF, planBody } from './bake-plan.fixtures.js';
 import { image, multipart } from './photo.fixtures.js';
 import { created, makeAdmin, send, signInCookie, signUp, type SignedUp } from './helpers.js';
@@ -82,6 +82,12 @@ export async function buildWorld(t: TestApp): Promise<World> {
       }),
       200,
     );
+  }
+  // In-app only: the matrix is about who may ask what, and mail and push attempts (to nowhere)
+  // would keep the alert worker busy beside it for the whole file.
+  const channels = Object.fromEntries(ALERT_KINDS.map((kind) => [kind, { email: false, push: false }]));
+  for (const a of Object.values(accounts)) {
+    await created(send(t.app, 'PATCH', '/api/account/alert-preferences', a.cookie, { channels }), 200);
   }
   const callers = Object.fromEntries(
     ROLES.map((role): [RoleName, Caller] => {
