@@ -190,6 +190,14 @@ describe('the instructor’s class', () => {
       expect(await feedingLink.getAttribute('href')).toMatch(new RegExp(`^/classes/${classId}/feedings/`));
       await page.screenshot({ path: join(RESULTS_DIR, 'classroom-culture-desktop.png'), fullPage: true });
 
+      // The classes list: the instructor's part in the class, and how many are in it.
+      await page.getByRole('link', { name: /Back to Weekend Levain/ }).click();
+      await page.getByRole('link', { name: '← All classes' }).click();
+      const mine = page.getByRole('list', { name: 'Your classes' }).getByRole('listitem').first();
+      await mine.getByText('You teach').waitFor();
+      expect(await mine.textContent()).toContain('3 students');
+      await page.screenshot({ path: join(RESULTS_DIR, 'classroom-classes-desktop.png') });
+
       // The same pages at phone size.
       const phone = await launchBrowser(PHONE);
       browsers.push(phone);
