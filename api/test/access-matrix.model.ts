@@ -16,6 +16,8 @@ export const INSTRUCTOR_OF: Record<Party, Person> = { A: 'instructorA', B: 'inst
 /**
  * How a caller stands to an object: its owner; an instructor whose class the owner belongs to
  * (the owner's logs are shared with them, read-only); anyone else. Anonymous callers have none.
+ * For a party's class the same words hold: the party is its student ('owned'), the class's
+ * instructor is 'shared', everyone else 'foreign'.
  */
 export type Relation = 'owned' | 'shared' | 'foreign';
 
