@@ -47,7 +47,7 @@ export function PhotoEditor({ photo, what, onDeleted }: { photo: Photo; what: st
           error={tooLong || fieldError !== undefined}
           helperText={
             fieldError?.message ??
-            `${trimmed.length} / ${PHOTO_CAPTION_MAX_LENGTH} characters${tooLong ? ' — too long' : ''}. E.g. “doubled, domed, smells of yoghurt”.`
+            `${trimmed.length} / ${PHOTO_CAPTION_MAX_LENGTH} characters${tooLong ? ' — too long' : ''}. E.g. ${what.startsWith('crumb') ? '“open and glossy, a little tight at the base”' : '“doubled, domed, smells of yoghurt”'}.`
           }
         />
         <Stack direction="row" spacing={1} sx={{ alignItems: 'center' }}>
@@ -67,29 +67,23 @@ export function PhotoEditor({ photo, what, onDeleted }: { photo: Photo; what: st
         )}
       </Stack>
       {confirming ? (
-        <Alert
-          severity="warning"
-          role="alertdialog"
-          aria-label={`Delete this ${what}?`}
-          action={
-            <Stack direction="row" spacing={1}>
-              <Button color="inherit" onClick={() => setConfirming(false)} disabled={remove.isPending}>
-                Keep
-              </Button>
-              <Button
-                color="error"
-                variant="contained"
-                loading={remove.isPending}
-                onClick={() => remove.mutate(photo.id, { onSuccess: onDeleted })}
-              >
-                Delete
-              </Button>
-            </Stack>
-          }
-        >
-          Delete this {what}? It is removed for good, with its stored copies.
+        <Alert severity="warning" role="alertdialog" aria-label={`Delete this ${what}?`}>
+          <Typography variant="body2">Delete this {what}? It is removed for good, with its stored copies.</Typography>
+          <Stack direction="row" spacing={1} sx={{ mt: 1 }}>
+            <Button
+              color="error"
+              variant="contained"
+              loading={remove.isPending}
+              onClick={() => remove.mutate(photo.id, { onSuccess: onDeleted })}
+            >
+              Delete
+            </Button>
+            <Button color="inherit" onClick={() => setConfirming(false)} disabled={remove.isPending}>
+              Keep it
+            </Button>
+          </Stack>
           {remove.isError && (
-            <Typography variant="body2" color="error" role="alert">
+            <Typography variant="body2" color="error" role="alert" sx={{ mt: 1 }}>
               {failure(remove.error)}
             </Typography>
           )}

@@ -31,14 +31,26 @@ export function PhotoUploader({ target, what }: { target: PhotoTarget; what: str
 
   return (
     <Stack spacing={1.5}>
-      <Stack direction="row" spacing={1.5} useFlexGap sx={{ flexWrap: 'wrap' }}>
-        <Button component="label" variant="contained" size="large" startIcon={<CameraAltOutlined />}>
+      <Stack direction="row" spacing={1} useFlexGap sx={{ flexWrap: 'wrap' }}>
+        <Button
+          component="label"
+          variant="contained"
+          size="large"
+          startIcon={<CameraAltOutlined />}
+          sx={{ flex: { xs: '1 1 auto', sm: '0 0 auto' }, whiteSpace: 'nowrap' }}
+        >
           Take photo
           <VisuallyHidden>
             <input type="file" accept={ACCEPT} capture="environment" onChange={pick} data-testid="photo-camera" />
           </VisuallyHidden>
         </Button>
-        <Button component="label" variant="outlined" size="large" startIcon={<PhotoLibraryOutlined />}>
+        <Button
+          component="label"
+          variant="outlined"
+          size="large"
+          startIcon={<PhotoLibraryOutlined />}
+          sx={{ flex: { xs: '1 1 auto', sm: '0 0 auto' }, whiteSpace: 'nowrap' }}
+        >
           Choose photos
           <VisuallyHidden>
             <input type="file" accept={ACCEPT} multiple onChange={pick} data-testid="photo-files" />
@@ -46,8 +58,10 @@ export function PhotoUploader({ target, what }: { target: PhotoTarget; what: str
         </Button>
       </Stack>
       <Typography variant="body2" color="text.secondary">
-        {what} · JPEG, PNG or WebP, up to {MAX_SIZE_WORDS} each, {PHOTOS_MAX_PER_REQUEST} at a time. Location data is
-        removed from every photo.
+        {what}
+        <br />
+        JPEG, PNG or WebP, up to {MAX_SIZE_WORDS} each, {PHOTOS_MAX_PER_REQUEST} at a time. Location data is removed
+        from every photo.
       </Typography>
       {uploads.pickProblem && (
         <Alert severity="warning" role="alert">

@@ -8,7 +8,7 @@ import { useId, useState } from 'react';
 import { LoadError } from '@/components/feedback/load-error';
 import { useSignedInAccount } from '@/lib/auth/use-signed-in-account';
 import { usePhotos } from '../api/get-photos';
-import { clockStyle, formatPhotoTime } from '../utils/photo-words';
+import { clockStyle, formatPhotoClock, formatPhotoDay, formatPhotoTime } from '../utils/photo-words';
 import { PhotoThumb } from './photo-thumb';
 import { PhotoUploader } from './photo-uploader';
 import { PhotoViewer } from './photo-viewer';
@@ -72,7 +72,8 @@ export function PhotosCard({ subject, readOnly = false }: PhotosCardProps) {
                 <Box component="li" key={photo.id} sx={{ minWidth: 0 }}>
                   <PhotoThumb photo={photo} when={when(photo.createdAt)} onOpen={() => setOpen(i)} />
                   <Typography variant="caption" color="text.secondary" component="p" noWrap sx={{ mt: 0.5 }}>
-                    {photo.caption ?? when(photo.createdAt)}
+                    {photo.caption ??
+                      `${formatPhotoDay(photo.createdAt, account.timeZone)} · ${formatPhotoClock(photo.createdAt, account.timeZone, style)}`}
                   </Typography>
                 </Box>
               ))}

@@ -1,0 +1,206 @@
+import { join } from 'node:path';
+import type { Page } from 'playwright-core';
+import { describe, expect, it } from 'vitest';
+import { baseUrl, RESULTS_DIR } from './browser';
+import { addRiseChecks, browserPerTest, createCulture, createFeeding, HOUR, post, signUp } from './helpers';
+
+// A bake to photograph: 75 % water, 20 % levain, 2 % salt (baker's percentages).
+const COUNTRY_LOAF = {
+  name: 'Country loaf 75 %',
+  ingredients: [
+    { kind: 'flour', name: 'Bread flour', amount: 1000, unit: 'g' },
+    { kind: 'water', name: 'Water', amount: 750, unit: 'g' },
+    { kind: 'starter', name: 'Levain', amount: 200, unit: 'g' },
+    { kind: 'salt', name: 'Salt', amount: 20, unit: 'g' },
+  ],
+};
+
+interface PhotoJson {
+  id: string;
+  feedingId: string | null;
+  caption: string | null;
+  thumbnailUrl: string;
+  displayUrl: string;
+}
+
+/**
+ * A small JPEG drawn in the page (a jar with a band and a risen starter), as a phone's camera
+ * would hand it over: no fixture file needed, and the bytes are a real JPEG the server must decode.
+ */
+async function jarJpeg(page: Page, level: number): Promise<Buffer> {
+  const base64 = await page.evaluate((risen) => {
+    const canvas = document.createElement('canvas');
+    canvas.width = 480;
+    canvas.height = 640;
+    const g = canvas.getContext('2d')!;
+    g.fillStyle = '#FBF7F0';
+    g.fillRect(0, 0, 480, 640);
+    g.fillStyle = '#E8DCC4';
+    g.fillRect(120, 640 - risen, 240, risen - 60);
+    g.strokeStyle = '#2F4858';
+    g.lineWidth = 8;
+    g.strokeRect(110, 120, 260, 460);
+    g.fillStyle = '#C9832E';
+    g.fillRect(104, 430, 272, 14);
+    return canvas.toDataURL('image/jpeg', 0.85).split(',')[1]!;
+  }, level);
+  return Buffer.from(base64, 'base64');
+}
+
+async function photosOf(page: Page, url: string): Promise<PhotoJson[]> {
+  const res = await page.request.get(url);
+  expect(res.status()).toBe(200);
+  return ((await res.json()) as { items: PhotoJson[] }).items;
+}
+
+/** Every <img> under the locator has loaded real pixels (fetched with the session cookie). */
+async function imagesLoaded(page: Page, selector: string): Promise<void> {
+  await expect
+    .poll(() =>
+      page.evaluate(
+        (sel) => [...document.querySelectorAll<HTMLImageElement>(sel)].every((i) => i.complete && i.naturalWidth > 0),
+        selector,
+      ),
+    )
+    .toBe(true);
+}
+
+async function settled(page: Page): Promise<void> {
+  await expect
+    .poll(() => page.evaluate(() => document.getAnimations().filter((a) => a.playState === 'running').length))
+    .toBe(0);
+}
+
+describe('jar photos from a phone', () => {
+  const base = baseUrl();
+  const browser = browserPerTest();
+
+  it('adds photos to a feeding (camera and gallery), refuses wrong files per file, shows them on the culture strip, captions and deletes one', async () => {
+    const page = await browser.context.newPage();
+    await signUp(page, base, 'Theo Park');
+    const cultureId = await createCulture(page, base, 'Bramble');
+    const fedAt = Date.now() - 4 * HOUR;
+    const feedingId = await createFeeding(page, base, cultureId, {
+      fedAt: new Date(fedAt).toISOString(),
+      ratio: '1:2:2',
+      totalG: 150,
+      temperatureC: 24,
+      initialHeightMm: 40,
+    });
+    await addRiseChecks(page, base, feedingId, fedAt, [
+      [1, 44],
+      [2, 58],
+      [3, 75],
+    ]);
+
+    await page.goto(`${base}/feedings/${feedingId}`);
+    const card = page.getByRole('region', { name: 'Jar photos' });
+    await card.getByText('No jar photos of this feeding yet.').waitFor();
+
+    // The gallery: two at once, one a real JPEG, one a text file dressed up as one (the server reads the bytes).
+    await card.getByTestId('photo-files').setInputFiles([
+      { name: 'jar-start.jpg', mimeType: 'image/jpeg', buffer: await jarJpeg(page, 200) },
+      { name: 'notes.jpg', mimeType: 'image/jpeg', buffer: Buffer.from('fed at 7, smells of apples\n') },
+    ]);
+    const rows = card.getByTestId('upload-row');
+    await expect
+      .poll(() => rows.evaluateAll((els) => els.map((e) => e.getAttribute('data-status'))))
+      .toEqual(['done', 'failed']);
+    const refusal = await rows.nth(1).getByRole('alert').textContent();
+    expect(refusal).toMatch(/JPEG|PNG|WebP/);
+
+    // A GIF never leaves the phone: the contract's types are checked first, with the reason.
+    await card
+      .getByTestId('photo-files')
+      .setInputFiles([{ name: 'crumb.gif', mimeType: 'image/gif', buffer: Buffer.from('GIF89a') }]);
+    await card.getByText('Not a photo Peakwise takes: only JPEG, PNG or WebP.').waitFor();
+
+    // "Take photo": the input that opens the camera.
+    expect(await card.getByTestId('photo-camera').getAttribute('capture')).toBe('environment');
+    await card
+      .getByTestId('photo-camera')
+      .setInputFiles([{ name: 'jar-peak.jpg', mimeType: 'image/jpeg', buffer: await jarJpeg(page, 420) }]);
+    await expect.poll(() => card.getByTestId('photo-thumb').count()).toBe(2);
+    await imagesLoaded(page, '[data-testid="photos-card"] img');
+    await settled(page);
+    await card.screenshot({ path: join(RESULTS_DIR, 'photos-feeding-phone.png') });
+    await page.screenshot({ path: join(RESULTS_DIR, 'photos-feeding-page-phone.png'), fullPage: true });
+
+    const stored = await photosOf(page, `${base}/api/feedings/${feedingId}/photos`);
+    expect(stored).toHaveLength(2);
+    expect(stored.every((p) => p.feedingId === feedingId)).toBe(true);
+
+    // The viewer: the display image, a caption.
+    await card.getByTestId('photo-thumb').nth(1).click();
+    const dialog = page.getByRole('dialog', { name: /Jar photo/ });
+    await dialog.waitFor();
+    await imagesLoaded(page, '[role="dialog"] img');
+    await dialog.getByLabel('Caption').fill('Domed at peak, 3 h');
+    await dialog.getByRole('button', { name: 'Save caption' }).click();
+    await dialog.getByText('Saved.').waitFor();
+    await settled(page);
+    await page.screenshot({ path: join(RESULTS_DIR, 'photos-viewer-phone.png') });
+    await dialog.getByRole('button', { name: 'Close' }).click();
+    await dialog.waitFor({ state: 'hidden' });
+
+    // The culture's strip: both photos in time order, under their feeding, each opening the viewer.
+    await page.goto(`${base}/cultures/${cultureId}`);
+    const strip = page.getByTestId('photo-strip');
+    await strip.scrollIntoViewIfNeeded();
+    await expect.poll(() => strip.getByTestId('photo-thumb').count()).toBe(2);
+    await imagesLoaded(page, '[data-testid="photo-strip"] img');
+    const feedingLink = strip.getByRole('link', { name: /^Feeding of / });
+    expect(await feedingLink.getAttribute('href')).toBe(`/feedings/${feedingId}`);
+    expect(await strip.getByTestId('photo-thumb').nth(1).getAttribute('aria-label')).toBe('Open Domed at peak, 3 h');
+    await settled(page);
+    await strip.screenshot({ path: join(RESULTS_DIR, 'photos-culture-strip-phone.png') });
+    await page.screenshot({ path: join(RESULTS_DIR, 'photos-culture-page-phone.png'), fullPage: true });
+
+    await strip.getByTestId('photo-thumb').nth(0).click();
+    await dialog.waitFor();
+    await dialog.getByText('1 of 2').waitFor();
+    await dialog.getByRole('link', { name: /^feeding of / }).waitFor();
+    await dialog.getByRole('button', { name: 'Delete photo' }).click();
+    await dialog.getByRole('alertdialog').waitFor();
+    await settled(page);
+    await page.screenshot({ path: join(RESULTS_DIR, 'photos-delete-confirm-phone.png') });
+    await dialog.getByRole('alertdialog').getByRole('button', { name: 'Delete', exact: true }).click();
+    await dialog.waitFor({ state: 'hidden' });
+    await expect.poll(() => strip.getByTestId('photo-thumb').count()).toBe(1);
+
+    // Gone on the server too: the list, and the image itself.
+    const left = await photosOf(page, `${base}/api/cultures/${cultureId}/photos`);
+    expect(left.map((p) => p.caption)).toEqual(['Domed at peak, 3 h']);
+    const deleted = stored.find((p) => p.id !== left[0]!.id)!;
+    expect((await page.request.get(`${base}${deleted.thumbnailUrl}`)).status()).toBe(404);
+  });
+
+  it('adds a crumb photo to a bake from the gallery and shows it in the bake’s photos', async () => {
+    const page = await browser.context.newPage();
+    await signUp(page, base, 'Amara Quist');
+    const formula = await post(page, `${base}/api/formulas`, COUNTRY_LOAF);
+    const plan = await post(page, `${base}/api/plans`, {
+      formulaId: formula.id,
+      mode: 'start-now',
+      doughTemperatureC: 24,
+      option: 'same-day',
+    });
+    await page.goto(`${base}/bench/${plan.id}`);
+    const card = page.getByRole('region', { name: 'Crumb photos' });
+    await card.getByText('No crumb photos of this bake yet.').waitFor();
+    await card
+      .getByTestId('photo-files')
+      .setInputFiles([{ name: 'crumb.jpg', mimeType: 'image/jpeg', buffer: await jarJpeg(page, 300) }]);
+    await expect.poll(() => card.getByTestId('photo-thumb').count()).toBe(1);
+    // Thumbnails load lazily: in view first, as the baker would scroll to them.
+    await card.getByTestId('photo-thumb').scrollIntoViewIfNeeded();
+    await imagesLoaded(page, '[data-testid="photos-card"] img');
+    const stored = await photosOf(page, `${base}/api/plans/${plan.id}/photos`);
+    expect(stored).toHaveLength(1);
+    expect(stored[0]!.feedingId).toBeNull();
+    await card.getByTestId('photo-thumb').click();
+    await page.getByRole('dialog', { name: /Crumb photo/ }).waitFor();
+    await settled(page);
+    await page.screenshot({ path: join(RESULTS_DIR, 'photos-crumb-viewer-phone.png') });
+  });
+});
