@@ -30,7 +30,10 @@ export function CheckSummary({ checked, adding, onConfirm, back }: CheckSummaryP
   const { collection, fresh, alreadyThere } = checked;
   const ref = useRef<HTMLDivElement>(null);
   // The outcome appears below the button the thumb just pressed; bring it into view.
-  useEffect(() => ref.current?.scrollIntoView({ block: 'start' }), []);
+  useEffect(() => {
+    // A block body: newer browsers answer scrollIntoView with a promise, which React would take for a cleanup.
+    ref.current?.scrollIntoView({ block: 'start' });
+  }, []);
   const unlisted = collection.problemCount - collection.problems.length;
 
   return (

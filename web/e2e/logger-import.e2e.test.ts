@@ -1,0 +1,66 @@
+import { join } from 'node:path';
+import { fileURLToPath } from 'node:url';
+import { describe, expect, it } from 'vitest';
+import { baseUrl, RESULTS_DIR } from './browser';
+import { browserPerTest, createCulture, createFeeding, patchAccount, signUp } from './helpers';
+
+// The invented sample test-fixtures/logger/kitchen-fahrenheit-mdy.csv: two metadata lines, then
+// "Date Time","Temp (°F)", one row a minute from 28 Nov 2026 06:00 to 29 Nov 17:59 (naive times).
+const SAMPLE = fileURLToPath(new URL('../../test-fixtures/logger/kitchen-fahrenheit-mdy.csv', import.meta.url));
+
+describe('importing a temperature logger file on a phone', () => {
+  const base = baseUrl();
+  const browser = browserPerTest();
+
+  it('preselects the columns, °F and the account zone, and adds the feeding’s part of the file', async () => {
+    const page = await browser.context.newPage();
+    await signUp(page, base, 'Ines Vale');
+    await patchAccount(page, base, { timeZone: 'Europe/Berlin' });
+    const cultureId = await createCulture(page, base, 'Larkspur rye');
+    // 13:00 in Berlin (UTC+1 in November): the file's 06:00–12:59 (420 rows) is before the feeding.
+    const feedingId = await createFeeding(page, base, cultureId, {
+      fedAt: '2026-11-28T12:00:00.000Z',
+      starterG: 20,
+      flourG: 100,
+      waterG: 100,
+      temperatureC: 20,
+    });
+
+    await page.goto(`${base}/feedings/${feedingId}`);
+    await page.getByRole('link', { name: 'Import logger file' }).click();
+    await page.waitForURL(`${base}/feedings/${feedingId}/temperatures/import`);
+    await page.getByTestId('logger-file').setInputFiles(SAMPLE);
+
+    await expect.poll(() => page.getByLabel('Time column').inputValue()).toBe('0');
+    const selected = (label: string) =>
+      page.getByLabel(label).evaluate((e) => (e as HTMLSelectElement).selectedOptions[0]?.text);
+    expect(await selected('Time column')).toBe('Date Time');
+    expect(await selected('Temperature column')).toBe('Temp (°F)');
+    expect(await selected('Temperatures are in')).toBe('°F (Fahrenheit)');
+    expect(await selected('Dates are written')).toContain('Month first');
+    expect(await page.getByLabel('Times without a zone are in').inputValue()).toBe('Europe/Berlin');
+    // The first data row is line 4 (two metadata lines and the header above it); 80.0 °F is 26.7 °C.
+    const preview = page.getByTestId('logger-preview');
+    await expect
+      .poll(() => preview.locator('tbody tr').first().innerText())
+      .toMatch(/^4\s+28 Nov 2026, 06:00\s+26\.7 °C$/);
+    await page.getByRole('heading', { name: '2. Check the columns' }).scrollIntoViewIfNeeded();
+    await page.screenshot({ path: join(RESULTS_DIR, 'logger-import-mapping.png'), fullPage: true });
+
+    await page.getByRole('button', { name: 'Check file' }).click();
+    const check = page.getByTestId('logger-check');
+    await expect.poll(() => check.innerText()).toContain('348 readings to add, from 2,160 rows read.');
+    expect(await check.innerText()).toContain('420 readings outside this feeding’s time');
+    await page.screenshot({ path: join(RESULTS_DIR, 'logger-import-check.png') });
+
+    await page.getByRole('button', { name: 'Add 348 readings' }).click();
+    const done = page.getByTestId('logger-import-done');
+    await expect
+      .poll(() => done.innerText())
+      .toContain('348 readings added; 420 outside this feeding’s time left out.');
+    await page.screenshot({ path: join(RESULTS_DIR, 'logger-import-done.png') });
+
+    const res = await page.request.get(`${base}/api/feedings/${feedingId}/temperatures?limit=1`);
+    expect(((await res.json()) as { total: number }).total).toBe(348);
+  });
+});
