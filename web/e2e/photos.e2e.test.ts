@@ -47,6 +47,26 @@ async function jarJpeg(page: Page, level: number): Promise<Buffer> {
   return Buffer.from(base64, 'base64');
 }
 
+/** A larger JPEG (noise compresses badly), so a throttled upload takes a while. */
+async function noisyJpeg(page: Page): Promise<Buffer> {
+  const base64 = await page.evaluate(() => {
+    const canvas = document.createElement('canvas');
+    canvas.width = 900;
+    canvas.height = 900;
+    const g = canvas.getContext('2d')!;
+    const image = g.createImageData(900, 900);
+    // A fixed-seed generator: the same bytes every run.
+    let seed = 42;
+    for (let i = 0; i < image.data.length; i++) {
+      seed = (seed * 1_103_515_245 + 12_345) % 2_147_483_648;
+      image.data[i] = i % 4 === 3 ? 255 : seed % 256;
+    }
+    g.putImageData(image, 0, 0);
+    return canvas.toDataURL('image/jpeg', 0.95).split(',')[1]!;
+  });
+  return Buffer.from(base64, 'base64');
+}
+
 async function photosOf(page: Page, url: string): Promise<PhotoJson[]> {
   const res = await page.request.get(url);
   expect(res.status()).toBe(200);
@@ -202,5 +222,59 @@ describe('jar photos from a phone', () => {
     await page.getByRole('dialog', { name: /Crumb photo/ }).waitFor();
     await settled(page);
     await page.screenshot({ path: join(RESULTS_DIR, 'photos-crumb-viewer-phone.png') });
+  });
+
+  it('shows each file’s own progress while a slow connection sends it', async () => {
+    const page = await browser.context.newPage();
+    await signUp(page, base, 'Dev Rowan');
+    const cultureId = await createCulture(page, base, 'Pip');
+    const feedingId = await createFeeding(page, base, cultureId, {
+      fedAt: new Date(Date.now() - HOUR).toISOString(),
+      ratio: '1:1:1',
+      totalG: 90,
+    });
+    await page.goto(`${base}/feedings/${feedingId}`);
+    const card = page.getByRole('region', { name: 'Jar photos' });
+    await card.getByText('No jar photos of this feeding yet.').waitFor();
+    const big = await noisyJpeg(page);
+    expect(big.length).toBeGreaterThan(300_000);
+
+    // A kitchen's weak signal: Chromium's own throttling, about 200 kB/s up.
+    const cdp = await page.context().newCDPSession(page);
+    await cdp.send('Network.enable');
+    await cdp.send('Network.emulateNetworkConditions', {
+      offline: false,
+      latency: 40,
+      downloadThroughput: 1_000_000,
+      uploadThroughput: 200_000,
+    });
+    await card.getByTestId('photo-files').setInputFiles([
+      { name: 'jar-1.jpg', mimeType: 'image/jpeg', buffer: big },
+      { name: 'jar-2.jpg', mimeType: 'image/jpeg', buffer: big },
+    ]);
+    const rows = card.getByTestId('upload-row');
+    // The first goes up while the second waits its turn; its bar is part-way.
+    const first = rows.nth(0).getByRole('progressbar');
+    await expect
+      .poll(async () => Number((await first.getAttribute('aria-valuenow')) ?? 0), { timeout: 20_000 })
+      .toBeGreaterThan(0);
+    expect(await rows.nth(1).getAttribute('data-status')).toBe('waiting');
+    expect(
+      await rows
+        .nth(0)
+        .getByText(/^Sending · \d+ %$/)
+        .count(),
+    ).toBe(1);
+    await card.screenshot({ path: join(RESULTS_DIR, 'photos-progress-phone.png'), animations: 'disabled' });
+    await cdp.send('Network.emulateNetworkConditions', {
+      offline: false,
+      latency: 0,
+      downloadThroughput: -1,
+      uploadThroughput: -1,
+    });
+    await expect
+      .poll(() => rows.evaluateAll((els) => els.map((e) => e.getAttribute('data-status'))), { timeout: 30_000 })
+      .toEqual(['done', 'done']);
+    await card.getByText('2 of 2 photos added').waitFor();
   });
 });
