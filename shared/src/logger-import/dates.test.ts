@@ -1,4 +1,5 @@
 import { describe, expect, it } from 'vitest';
+import { instantAtLocal } from '../fermentation/plan/zone.js';
 import { detectDateFormat, hasOffset, parseLoggerTime } from './dates.js';
 
 const at = (iso: string) => Date.parse(iso);
@@ -36,6 +37,34 @@ describe('parseLoggerTime', () => {
     expect(parseLoggerTime('28/11/2026 07:15', 'mdy', 'UTC')).toBeNull();
     expect(parseLoggerTime('ERR', 'iso', 'UTC')).toBeNull();
     expect(parseLoggerTime('2026-02-29 07:15', 'iso', 'UTC')).toBeNull();
+  });
+});
+
+describe('naive times across daylight-saving changes', () => {
+  it('gives the same instants as the zone rules of instantAtLocal, every 10 minutes for two days around each change', () => {
+    // EU summer time 2026: 29 March 02:00 → 03:00, 25 October 03:00 → 02:00 (EU directive 2000/84/EC, from memory).
+    const pad = (n: number) => String(n).padStart(2, '0');
+    for (const [month, day] of [
+      [3, 28],
+      [10, 24],
+    ] as const) {
+      for (let minutes = 0; minutes < 48 * 60; minutes += 10) {
+        const d = new Date(Date.UTC(2026, month - 1, day, 0, minutes));
+        const [y, m, dd, h, mm] = [
+          d.getUTCFullYear(),
+          d.getUTCMonth() + 1,
+          d.getUTCDate(),
+          d.getUTCHours(),
+          d.getUTCMinutes(),
+        ];
+        const cell = `${y}-${pad(m)}-${pad(dd)} ${pad(h)}:${pad(mm)}`;
+        expect(parseLoggerTime(cell, 'iso', 'Europe/Berlin'), cell).toBe(
+          instantAtLocal(y, m, dd, h, mm, 'Europe/Berlin'),
+        );
+      }
+    }
+    expect(parseLoggerTime('2026-03-29 01:59', 'iso', 'Europe/Berlin')).toBe(at('2026-03-29T00:59:00Z'));
+    expect(parseLoggerTime('2026-03-29 03:00', 'iso', 'Europe/Berlin')).toBe(at('2026-03-29T01:00:00Z'));
   });
 });
 
