@@ -84,11 +84,13 @@ describe('GET /api/classes/:classId/roster', () => {
     expect((await roster('?sort=sluggish&order=asc')).items.at(-1)?.cultureName).toBe('Pip');
   });
 
-  it('quotes the culture page’s time to peak at 24 °C and its latest rise', async () => {
+  it('quotes the latest normalised time to peak (the chart’s last point) and the latest rise', async () => {
+    const { series } = (await get('progress')).json<ClassProgressResponse>();
     for (const row of (await roster()).items) {
       const res = await get(`cultures/${row.cultureId}/summary`);
       const summary = res.json<CultureSummary>();
-      expect(row.hoursToPeakAtReference).toBeCloseTo(summary.kinetics.hoursToPeakAtReference, 9);
+      const last = series.find((s) => s.cultureId === row.cultureId)?.points.at(-1);
+      expect(row.hoursToPeakAtReference).toBeCloseTo(last!.hoursToPeakAtReference, 9);
       expect(row.lastFedAt).toBe(summary.lastFedAt);
     }
     // The seed flattens Pip's newest rises to under half their height gain; the others rise 2–2.8×.

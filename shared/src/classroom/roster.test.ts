@@ -126,6 +126,13 @@ describe('rosterEntry flags', () => {
     expect(row.hoursSinceFed).toBeCloseTo(2, 9);
     expect(row.riseMultiple).toBe(2.6);
   });
+
+  it('quotes the latest finished feeding’s normalised time to peak, the fit only before one finished', () => {
+    const slowing = daily([4, 4, 4, 6.5]);
+    const rising = { ...slowing[0]!, fedAt: hoursAgo(1), normalisedHoursToPeak: null };
+    expect(rosterEntry(culture('Dev', [rising, ...slowing]), NOW).row.hoursToPeakAtReference).toBe(6.5);
+    expect(rosterEntry(culture('Dev', [rising]), NOW).row.hoursToPeakAtReference).toBe(4.5);
+  });
 });
 
 describe('queryRoster', () => {

@@ -50,6 +50,16 @@ export interface RosterCultureInput {
   hoursToPeakAtReference: number | null;
 }
 
+/**
+ * The roster's time to peak: the LATEST completed feeding's, normalised to 1:1:1 at 24 °C (the class
+ * chart's last point), so a culture slowing down shows it now rather than averaged into its fit;
+ * the fitted value while no feeding has finished.
+ */
+export function latestHoursToPeak(input: RosterCultureInput): number | null {
+  const latest = input.feedings.find((f) => f.normalisedHoursToPeak !== null);
+  return latest?.normalisedHoursToPeak ?? input.hoursToPeakAtReference;
+}
+
 export interface RosterTrend {
   trend: RosterRow['trend'];
   /** Recent ÷ baseline mean normalised time to peak (> 1: slower); null with too few feedings. */
@@ -132,7 +142,7 @@ export function rosterEntry(input: RosterCultureInput, now: string): RosterEntry
     cultureName: culture.name,
     lastFedAt: latest?.fedAt ?? null,
     hoursSinceFed,
-    hoursToPeakAtReference: input.hoursToPeakAtReference,
+    hoursToPeakAtReference: latestHoursToPeak(input),
     riseMultiple: withChecks?.riseMultiple ?? null,
     trend: trend.trend,
     // In ROSTER_FLAGS order, so every client lists them alike.

@@ -153,7 +153,10 @@ export interface RosterRow {
   cultureName: string | null;
   lastFedAt: string | null;
   hoursSinceFed: number | null;
-  /** Latest time to peak of a 1:1:1 feeding at 24 °C, from the culture's fitted kinetics, hours. */
+  /**
+   * The latest completed feeding's time to peak normalised to a 1:1:1 feeding at 24 °C (the class
+   * chart's last point), hours; the culture's fitted value while no feeding has finished.
+   */
   hoursToPeakAtReference: number | null;
   /** Peak height ÷ initial height of the latest feeding with rise checks. */
   riseMultiple: number | null;
