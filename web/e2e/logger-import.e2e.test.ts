@@ -60,6 +60,13 @@ describe('importing a temperature logger file on a phone', () => {
       .toContain('348 readings added; 420 outside this feeding’s time left out.');
     await page.screenshot({ path: join(RESULTS_DIR, 'logger-import-done.png') });
 
+    // Back on the feeding, the card lists them (and the link to import more).
+    await page.getByRole('link', { name: 'Back to the feeding' }).click();
+    await page.waitForURL(`${base}/feedings/${feedingId}`);
+    const card = page.getByRole('heading', { name: 'Temperatures' });
+    await card.evaluate((e) => window.scrollTo(0, e.getBoundingClientRect().top + window.scrollY - 72));
+    await page.screenshot({ path: join(RESULTS_DIR, 'logger-import-feeding.png') });
+
     const res = await page.request.get(`${base}/api/feedings/${feedingId}/temperatures?limit=1`);
     expect(((await res.json()) as { total: number }).total).toBe(348);
   });

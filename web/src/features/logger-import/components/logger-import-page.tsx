@@ -118,7 +118,8 @@ export function LoggerImportPage({ feedingId }: { feedingId: string }) {
     return (
       <Page title={title}>
         <Alert severity="success" role="status" data-testid="logger-import-done">
-          {addedText(done.added, done.outside)} The forecast now uses them.
+          {addedText(done.added, done.outside)} They are on the feeding’s temperature card, and the model integrates
+          them.
         </Alert>
         <Button component={RouterLink} to={back} variant="contained" size="large" sx={{ alignSelf: 'start' }}>
           Back to the feeding
