@@ -6,7 +6,8 @@ import { browserPerTest, createCulture, createFeeding, patchAccount, signUp } fr
 
 // The invented sample test-fixtures/logger/kitchen-fahrenheit-mdy.csv: two metadata lines, then
 // "Date Time","Temp (°F)", one row a minute from 28 Nov 2026 06:00 to 29 Nov 17:59 (naive times).
-const SAMPLE = fileURLToPath(new URL('../../test-fixtures/logger/kitchen-fahrenheit-mdy.csv', import.meta.url));
+const sample = (name: string) => fileURLToPath(new URL(`../../test-fixtures/logger/${name}`, import.meta.url));
+const SAMPLE = sample('kitchen-fahrenheit-mdy.csv');
 
 describe('importing a temperature logger file on a phone', () => {
   const base = baseUrl();
@@ -69,5 +70,29 @@ describe('importing a temperature logger file on a phone', () => {
 
     const res = await page.request.get(`${base}/api/feedings/${feedingId}/temperatures?limit=1`);
     expect(((await res.json()) as { total: number }).total).toBe(348);
+  });
+
+  it('lists the rows it cannot read by line, and reads a "DateTime (UTC)" file as UTC', async () => {
+    const page = await browser.context.newPage();
+    await signUp(page, base, 'Ines Vale');
+    await patchAccount(page, base, { timeZone: 'America/Chicago' });
+    const cultureId = await createCulture(page, base, 'Larkspur rye');
+    const feedingId = await createFeeding(page, base, cultureId, {
+      fedAt: '2026-11-28T07:00:00.000Z',
+      starterG: 20,
+      flourG: 100,
+      waterG: 100,
+    });
+    await page.goto(`${base}/feedings/${feedingId}/temperatures/import`);
+    // Invented sample: 12 rows every 10 min from 07:15 UTC, line 6 without a temperature, line 9 "ERR".
+    await page.getByTestId('logger-file').setInputFiles(sample('cellar-celsius-utc.csv'));
+    await expect.poll(() => page.getByLabel('Times without a zone are in').inputValue()).toBe('UTC');
+    await page.getByRole('button', { name: 'Check file' }).click();
+    const problems = page.getByTestId('logger-problems');
+    await expect.poll(() => problems.innerText()).toContain('2 rows could not be read');
+    expect(await problems.innerText()).toContain('Line 9: “ERR” is not a number.');
+    expect(await page.getByTestId('logger-check').innerText()).toContain('10 readings to add');
+    await page.mouse.move(0, 0);
+    await page.screenshot({ path: join(RESULTS_DIR, 'logger-import-problems.png') });
   });
 });

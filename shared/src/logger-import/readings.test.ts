@@ -64,7 +64,7 @@ describe('LoggerCollector', () => {
   it('names unreadable rows by their line in the file', () => {
     const result = collect('cellar-celsius-utc.csv', '2026-11-28T07:00:00Z');
     expect(result.problems).toEqual([
-      { line: 6, message: 'no temperature is not a number.' },
+      { line: 6, message: 'No temperature in this row.' },
       { line: 9, message: '“ERR” is not a number.' },
     ]);
     expect(result.readings).toHaveLength(10);

@@ -70,14 +70,20 @@ export class LoggerCollector {
     const timeCell = cells[this.mapping.timeColumn] ?? '';
     const ms = parseLoggerTime(timeCell, this.mapping.dateFormat, this.mapping.timeZone);
     if (ms === null) {
-      const shown = timeCell.trim() === '' ? 'no time' : `“${timeCell.trim()}”`;
-      this.problem(line, `${shown} is not a time in the form ${LOGGER_DATE_FORMAT_LABELS[this.mapping.dateFormat]}.`);
+      const form = LOGGER_DATE_FORMAT_LABELS[this.mapping.dateFormat];
+      this.problem(
+        line,
+        timeCell.trim() === '' ? 'No time in this row.' : `“${timeCell.trim()}” is not a time in the form ${form}.`,
+      );
       return;
     }
     const tempCell = cells[this.mapping.temperatureColumn] ?? '';
     const value = parseLoggerNumber(tempCell);
     if (value === null) {
-      this.problem(line, `${tempCell.trim() === '' ? 'no temperature' : `“${tempCell.trim()}”`} is not a number.`);
+      this.problem(
+        line,
+        tempCell.trim() === '' ? 'No temperature in this row.' : `“${tempCell.trim()}” is not a number.`,
+      );
       return;
     }
     if (ms < this.window.fedAtMs || ms > this.endMs) {

@@ -43,7 +43,7 @@ export function PreviewRows({ rows, mapping, timeZone, unit }: PreviewRowsProps)
           const c = value === null ? null : mapping.unit === 'F' ? fahrenheitToCelsius(value) : value;
           const unread = (cell: string | undefined) => (
             <Typography component="span" color="error" variant="body2">
-              “{cell ?? ''}” not read
+              {cell?.trim() ? `“${cell}” not read` : 'empty, not read'}
             </Typography>
           );
           return (
