@@ -2,7 +2,16 @@ import { join } from 'node:path';
 import type { Page } from 'playwright-core';
 import { describe, expect, it } from 'vitest';
 import { baseUrl, RESULTS_DIR } from './browser';
-import { addRiseChecks, browserPerTest, createCulture, createFeeding, HOUR, post, signUp } from './helpers';
+import {
+  addRiseChecks,
+  browserPerTest,
+  createCulture,
+  createFeeding,
+  HOUR,
+  patchAccount,
+  post,
+  signUp,
+} from './helpers';
 
 // A bake to photograph: 75 % water, 20 % levain, 2 % salt (baker's percentages).
 const COUNTRY_LOAF = {
@@ -98,6 +107,8 @@ describe('jar photos from a phone', () => {
   it('adds photos to a feeding (camera and gallery), refuses wrong files per file, shows them on the culture strip, captions and deletes one', async () => {
     const page = await browser.context.newPage();
     await signUp(page, base, 'Theo Park');
+    // A baker on US units in Chicago: a 12-hour clock, in their own zone.
+    await patchAccount(page, base, { unitSystem: 'us', temperatureUnit: 'F', timeZone: 'America/Chicago' });
     const cultureId = await createCulture(page, base, 'Bramble');
     const fedAt = Date.now() - 4 * HOUR;
     const feedingId = await createFeeding(page, base, cultureId, {
@@ -141,6 +152,8 @@ describe('jar photos from a phone', () => {
       .getByTestId('photo-camera')
       .setInputFiles([{ name: 'jar-peak.jpg', mimeType: 'image/jpeg', buffer: await jarJpeg(page, 420) }]);
     await expect.poll(() => card.getByTestId('photo-thumb').count()).toBe(2);
+    // Thumbnails load lazily: in view first, as the baker would scroll to them.
+    await card.getByTestId('photo-thumb').nth(1).scrollIntoViewIfNeeded();
     await imagesLoaded(page, '[data-testid="photos-card"] img');
     await settled(page);
     await card.screenshot({ path: join(RESULTS_DIR, 'photos-feeding-phone.png') });
@@ -169,7 +182,7 @@ describe('jar photos from a phone', () => {
     await strip.scrollIntoViewIfNeeded();
     await expect.poll(() => strip.getByTestId('photo-thumb').count()).toBe(2);
     await imagesLoaded(page, '[data-testid="photo-strip"] img');
-    const feedingLink = strip.getByRole('link', { name: /^Feeding of / });
+    const feedingLink = strip.getByRole('link', { name: /^Fed \d{1,2} \w{3}, \d{1,2}:\d{2} (AM|PM)$/ });
     expect(await feedingLink.getAttribute('href')).toBe(`/feedings/${feedingId}`);
     expect(await strip.getByTestId('photo-thumb').nth(1).getAttribute('aria-label')).toBe('Open Domed at peak, 3 h');
     await settled(page);

@@ -58,6 +58,13 @@ export function PhotoStrip({ cultureId, feedingHref, source, readOnly = false }:
     const at = fedAt.get(feedingId);
     return at ? `feeding of ${when(at)}` : 'its feeding';
   };
+  // The group's own label is narrow (one thumbnail wide at least): "Fed 2 Dec, 05:09".
+  const shortLabel = (feedingId: string) => {
+    const at = fedAt.get(feedingId);
+    return at
+      ? `Fed ${formatPhotoDay(at, account.timeZone)}, ${formatPhotoClock(at, account.timeZone, style)}`
+      : 'Feeding';
+  };
   const link = (photo: Photo) =>
     photo.feedingId && feedingHref
       ? { href: feedingHref(photo.feedingId), label: feedingLabel(photo.feedingId) }
@@ -104,12 +111,11 @@ export function PhotoStrip({ cultureId, feedingHref, source, readOnly = false }:
                 >
                   <Typography
                     variant="body2"
-                    noWrap
-                    sx={{ mb: 0.5, fontWeight: 500, maxWidth: Math.max(THUMB, group.photos.length * (THUMB + 8)) }}
+                    sx={{ mb: 0.5, fontWeight: 500, maxWidth: group.photos.length * (THUMB + 8) - 8 }}
                   >
                     {group.feedingId && feedingHref ? (
                       <Link component={RouterLink} to={feedingHref(group.feedingId)}>
-                        {capitalise(feedingLabel(group.feedingId))}
+                        {shortLabel(group.feedingId)}
                       </Link>
                     ) : (
                       'Not of a feeding'
@@ -148,5 +154,3 @@ export function PhotoStrip({ cultureId, feedingHref, source, readOnly = false }:
     </Card>
   );
 }
-
-const capitalise = (s: string) => s.charAt(0).toUpperCase() + s.slice(1);
