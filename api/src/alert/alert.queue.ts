@@ -152,7 +152,7 @@ export class AlertQueue implements OnApplicationBootstrap, OnApplicationShutdown
    */
   async schedule(deliveryId: string, slotKey: string, at: Date): Promise<void> {
     await this.started;
-    const singletonKey = `${slotKey}:${deliveryId}:${at.getTime()}`;
+    const singletonKey = jobKey({ deliveryId, slotKey, at });
     await this.db.transaction().execute(async (trx) => {
       await sql`SELECT pg_advisory_xact_lock(${SCHEDULE_LOCK_SPACE}, hashtext(${singletonKey}))`.execute(trx);
       const waiting = await sql`
@@ -163,12 +163,54 @@ export class AlertQueue implements OnApplicationBootstrap, OnApplicationShutdown
       await this.boss.send(ALERT_DUE_QUEUE, { deliveryId } satisfies AlertDueJob, {
         startAfter: at,
         singletonKey,
-        retryLimit: 5,
-        retryDelay: 30,
-        retryBackoff: true,
+        ...RETRY,
         // Inside this transaction, so the lock is held until the job is visible to the next check.
         db: { executeSql: (text, values) => trx.executeQuery(CompiledQuery.raw(text, values)) },
       });
     });
   }
+
+  /**
+   * The start-up sweep: a job for each open delivery that has none waiting, in one transaction.
+   * One query reads the waiting keys and one insert per thousand adds the rest, so a start with
+   * thousands of open deliveries takes a moment, not a query per delivery.
+   */
+  async scheduleMany(items: ScheduleItem[]): Promise<number> {
+    await this.started;
+    if (items.length === 0) return 0;
+    return this.db.transaction().execute(async (trx) => {
+      await sql`SELECT pg_advisory_xact_lock(${SCHEDULE_LOCK_SPACE}, 0)`.execute(trx);
+      const waiting = await sql<{ key: string }>`
+        SELECT singleton_key AS key FROM ${sql.table(`${ALERT_QUEUE_SCHEMA}.job`)}
+         WHERE name = ${ALERT_DUE_QUEUE} AND state IN ('created', 'retry') AND singleton_key IS NOT NULL`.execute(trx);
+      const have = new Set(waiting.rows.map((r) => r.key));
+      const missing = items.filter((item) => !have.has(jobKey(item)));
+      const db = { executeSql: (text: string, values: unknown[]) => trx.executeQuery(CompiledQuery.raw(text, values)) };
+      for (let i = 0; i < missing.length; i += 1000) {
+        await this.boss.insert(
+          missing.slice(i, i + 1000).map((item) => ({
+            name: ALERT_DUE_QUEUE,
+            data: { deliveryId: item.deliveryId } satisfies AlertDueJob,
+            startAfter: item.at,
+            singletonKey: jobKey(item),
+            ...RETRY,
+          })),
+          { db },
+        );
+      }
+      return missing.length;
+    });
+  }
 }
+
+export interface ScheduleItem {
+  deliveryId: string;
+  slotKey: string;
+  at: Date;
+}
+
+/** The job's key includes the time, so a moved delivery gets a fresh job. */
+const jobKey = (item: ScheduleItem): string => `${item.slotKey}:${item.deliveryId}:${item.at.getTime()}`;
+
+/** A failed delivery is tried again five times, 30 s apart and growing. */
+const RETRY = { retryLimit: 5, retryDelay: 30, retryBackoff: true } as const;

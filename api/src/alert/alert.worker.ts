@@ -41,7 +41,8 @@ export class AlertWorker implements OnModuleInit {
    * spare a no-op. This is what makes the promise survive a queue that was down or wiped.
    */
   async scheduleOpen(): Promise<void> {
-    for (const d of await this.alerts.openDeliveries()) await this.queue.schedule(d.id, d.slotKey, d.sendAfter);
+    const open = await this.alerts.openDeliveries();
+    await this.queue.scheduleMany(open.map((d) => ({ deliveryId: d.id, slotKey: d.slotKey, at: d.sendAfter })));
   }
 
   /** Claim, then send; a delivery someone else holds, already sent, or not yet due is left alone. */
