@@ -139,6 +139,8 @@ describe('jar photos from a phone', () => {
       .toEqual(['done', 'failed']);
     const refusal = await rows.nth(1).getByRole('alert').textContent();
     expect(refusal).toMatch(/JPEG|PNG|WebP/);
+    await settled(page);
+    await card.screenshot({ path: join(RESULTS_DIR, 'photos-refused-phone.png') });
 
     // A GIF never leaves the phone: the contract's types are checked first, with the reason.
     await card

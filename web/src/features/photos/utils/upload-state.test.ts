@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { isBusy, percent, summary, uploadReducer, type UploadItem } from './upload-state';
+import { isBusy, percent, summary, uploadReducer, type UploadAction, type UploadItem } from './upload-state';
 
 const picked = uploadReducer([], {
   type: 'add',
@@ -38,6 +38,27 @@ describe('the uploader’s list', () => {
     items = uploadReducer(items, { type: 'failed', key: 'a', message: 'Could not be reached.', retryable: true });
     const retried = uploadReducer(items, { type: 'retry', key: 'a' });
     expect(item(retried, 'a')).toMatchObject({ status: 'waiting', sent: 0, message: null });
+  });
+
+  it('starts a new pick’s list without the last pick’s added and refused files', () => {
+    let items = uploadReducer(picked, { type: 'start', key: 'a' });
+    items = uploadReducer(items, { type: 'done', key: 'a' });
+    items = uploadReducer(items, {
+      type: 'add',
+      items: [{ key: 'c', name: 'jar-peak.jpg', size: 900, problem: null }],
+    });
+    expect(items.map((i) => [i.key, i.status])).toEqual([['c', 'waiting']]);
+    expect(summary(items)).toBe('0 of 1 photo added');
+  });
+
+  it('keeps a file still on its way, or worth retrying, when another pick comes', () => {
+    const sending = uploadReducer(picked, { type: 'start', key: 'a' });
+    const add: UploadAction = { type: 'add', items: [{ key: 'c', name: 'c.jpg', size: 9, problem: null }] };
+    expect(uploadReducer(sending, add).map((i) => i.key)).toEqual(['a', 'c']);
+    const offline = uploadReducer(sending, { type: 'failed', key: 'a', message: 'offline', retryable: true });
+    expect(uploadReducer(offline, add).map((i) => i.key)).toEqual(['a', 'c']);
+    const refused = uploadReducer(sending, { type: 'failed', key: 'a', message: 'Not an image', retryable: false });
+    expect(uploadReducer(refused, add).map((i) => i.key)).toEqual(['c']);
   });
 
   it('drops a dismissed file and clears finished ones', () => {

@@ -26,6 +26,8 @@ export type UploadAction =
   | { type: 'dismiss'; key: string }
   | { type: 'clear-finished' };
 
+const isMoving = (i: UploadItem) => i.status === 'waiting' || i.status === 'sending' || i.status === 'processing';
+
 function update(items: UploadItem[], key: string, change: Partial<UploadItem>): UploadItem[] {
   return items.map((item) => (item.key === key ? { ...item, ...change } : item));
 }
@@ -34,8 +36,10 @@ function update(items: UploadItem[], key: string, change: Partial<UploadItem>): 
 export function uploadReducer(items: UploadItem[], action: UploadAction): UploadItem[] {
   switch (action.type) {
     case 'add':
+      // A new pick starts a new list: what went up before is in the grid, what was refused has
+      // been read; a file still on its way, or failed and worth retrying, stays.
       return [
-        ...items,
+        ...items.filter((i) => isMoving(i) || (i.status === 'failed' && i.retryable)),
         ...action.items.map((i): UploadItem => ({
           key: i.key,
           name: i.name,
@@ -80,7 +84,7 @@ export function percent(item: UploadItem): number {
 
 /** Whether something is still on its way (the buttons stay usable; this only drives the summary). */
 export function isBusy(items: readonly UploadItem[]): boolean {
-  return items.some((i) => i.status === 'waiting' || i.status === 'sending' || i.status === 'processing');
+  return items.some(isMoving);
 }
 
 /** "2 of 3 photos added · 1 could not be added", or null when nothing was picked. */
