@@ -1,6 +1,6 @@
 import { IDEMPOTENCY_KEY_HEADER, type ErrorResponse, type PhotoUploadResponse } from '@peakwise/shared';
 import { useQueryClient } from '@tanstack/react-query';
-import { useCallback, useEffect, useReducer, useRef } from 'react';
+import { useCallback, useEffect, useReducer, useRef, useState } from 'react';
 import { ApiError, isApiError } from '@/lib/api-client';
 import { checkPick } from '../utils/photo-checks';
 import { uploadErrorMessage, worthRetrying } from '../utils/upload-errors';
@@ -82,7 +82,7 @@ export interface PhotoUploads {
 export function usePhotoUploads(target: PhotoTarget): PhotoUploads {
   const queryClient = useQueryClient();
   const [items, dispatch] = useReducer(uploadReducer, []);
-  const [pickProblem, setPickProblem] = useReducer((_: string | null, next: string | null) => next, null);
+  const [pickProblem, setPickProblem] = useState<string | null>(null);
   const files = useRef(new Map<string, File>());
   const keys = useRef(new Map<string, string>());
   const sending = useRef(false);
