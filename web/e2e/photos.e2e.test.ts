@@ -1,7 +1,8 @@
+import { execFileSync } from 'node:child_process';
 import { join } from 'node:path';
 import type { Page } from 'playwright-core';
 import { describe, expect, it } from 'vitest';
-import { baseUrl, RESULTS_DIR } from './browser';
+import { baseUrl, DESKTOP, launchBrowser, RESULTS_DIR, uniqueEmail } from './browser';
 import {
   addRiseChecks,
   browserPerTest,
@@ -291,5 +292,112 @@ describe('jar photos from a phone', () => {
       .poll(() => rows.evaluateAll((els) => els.map((e) => e.getAttribute('data-status'))), { timeout: 30_000 })
       .toEqual(['done', 'done']);
     await card.getByText('2 of 2 photos added').waitFor();
+  });
+});
+
+/** The instructor role straight in the database (a fresh test database has no admin to give it). */
+function makeInstructor(email: string): void {
+  const url = process.env.DATABASE_URL;
+  if (!url) throw new Error('DATABASE_URL is not set: this test makes an instructor in the database');
+  execFileSync('psql', [url, '-qc', `UPDATE account SET role = 'instructor' WHERE email = '${email}'`]);
+}
+
+const isoDay = (ms: number) => new Date(ms).toISOString().slice(0, 10);
+
+describe('a student’s photos for the class’s instructor', () => {
+  const base = baseUrl();
+  const browser = browserPerTest();
+
+  it('shows the strip beside the rise curves, the feeding’s and the bake’s photos, read-only', async () => {
+    // The student, on a phone: a feeding with a captioned jar photo, a bake with a crumb photo.
+    const s = await browser.context.newPage();
+    await signUp(s, base, 'Theo Park');
+    const cultureId = await createCulture(s, base, 'Bramble');
+    const fedAt = Date.now() - 3 * HOUR;
+    const feedingId = await createFeeding(s, base, cultureId, {
+      fedAt: new Date(fedAt).toISOString(),
+      ratio: '1:2:2',
+      totalG: 150,
+      temperatureC: 23,
+      initialHeightMm: 40,
+    });
+    await addRiseChecks(s, base, feedingId, fedAt, [
+      [1, 46],
+      [2, 64],
+    ]);
+    const upload = async (path: string, name: string, level: number) => {
+      const res = await s.request.post(`${base}/api/${path}/photos`, {
+        headers: { 'Idempotency-Key': crypto.randomUUID() },
+        multipart: { photos: { name, mimeType: 'image/jpeg', buffer: await jarJpeg(s, level) } },
+      });
+      expect(res.status(), await res.text()).toBe(201);
+      return ((await res.json()) as { items: PhotoJson[] }).items[0]!;
+    };
+    const jar = await upload(`feedings/${feedingId}`, 'jar.jpg', 380);
+    expect(
+      (await s.request.patch(`${base}/api/photos/${jar.id}`, { data: { caption: 'Two hours in' } })).status(),
+    ).toBe(200);
+    const formula = await post(s, `${base}/api/formulas`, COUNTRY_LOAF);
+    const plan = await post(s, `${base}/api/plans`, {
+      formulaId: formula.id,
+      cultureId,
+      mode: 'start-now',
+      doughTemperatureC: 24,
+      option: 'same-day',
+    });
+    await upload(`plans/${plan.id}`, 'crumb.jpg', 300);
+
+    // The instructor, at a desk: a class the student joins by code.
+    const desk = await launchBrowser(DESKTOP);
+    try {
+      const t = await desk.context.newPage();
+      const ines = uniqueEmail('ines');
+      await signUp(t, base, 'Ines Marlow', ines);
+      makeInstructor(ines);
+      const cls = await post<{ id: string; joinCode: string }>(t, `${base}/api/classes`, {
+        name: 'Weekend Levain',
+        startsOn: isoDay(Date.now() - 7 * 24 * HOUR),
+        endsOn: isoDay(Date.now() + 30 * 24 * HOUR),
+      });
+      const joined = await s.request.post(`${base}/api/class-join`, { data: { code: cls.joinCode } });
+      expect(joined.status(), await joined.text()).toBe(200);
+
+      await t.goto(`${base}/classes/${cls.id}/cultures/${cultureId}`);
+      const strip = t.getByTestId('photo-strip');
+      await strip.scrollIntoViewIfNeeded();
+      await expect.poll(() => strip.getByTestId('photo-thumb').count()).toBe(1);
+      await imagesLoaded(t, '[data-testid="photo-strip"] img');
+      await settled(t);
+      await t.screenshot({ path: join(RESULTS_DIR, 'photos-class-culture-desktop.png'), fullPage: true });
+      await strip.getByTestId('photo-thumb').click();
+      const dialog = t.getByRole('dialog', { name: /Jar photo/ });
+      await dialog.getByText('Two hours in').waitFor();
+      expect(await dialog.getByRole('link', { name: /^feeding of / }).getAttribute('href')).toBe(
+        `/classes/${cls.id}/feedings/${feedingId}`,
+      );
+      // Read-only: no caption to edit, nothing to delete.
+      expect(await dialog.getByLabel('Caption').count()).toBe(0);
+      expect(await dialog.getByRole('button', { name: 'Delete photo' }).count()).toBe(0);
+      await imagesLoaded(t, '[role="dialog"] img');
+      await settled(t);
+      await t.screenshot({ path: join(RESULTS_DIR, 'photos-class-viewer-desktop.png') });
+      await dialog.getByRole('button', { name: 'Close' }).click();
+
+      await t.goto(`${base}/classes/${cls.id}/feedings/${feedingId}`);
+      const jarCard = t.getByRole('region', { name: 'Jar photos' });
+      await expect.poll(() => jarCard.getByTestId('photo-thumb').count()).toBe(1);
+      expect(await jarCard.getByRole('button', { name: 'Take photo' }).count()).toBe(0);
+
+      await t.goto(`${base}/classes/${cls.id}/plans/${plan.id}`);
+      const crumbCard = t.getByRole('region', { name: 'Crumb photos' });
+      await expect.poll(() => crumbCard.getByTestId('photo-thumb').count()).toBe(1);
+      expect(await crumbCard.getByRole('button', { name: 'Choose photos' }).count()).toBe(0);
+      await crumbCard.scrollIntoViewIfNeeded();
+      await imagesLoaded(t, '[data-testid="photos-card"] img');
+      await settled(t);
+      await t.screenshot({ path: join(RESULTS_DIR, 'photos-class-plan-desktop.png'), fullPage: true });
+    } finally {
+      await desk.close();
+    }
   });
 });

@@ -16,6 +16,7 @@ import { ForecastHeader } from '@/features/culture/components/forecast-header';
 import { KineticsCard } from '@/features/culture/components/kinetics-card';
 import { RiseOverlayCard } from '@/features/culture/components/rise-overlay-card';
 import { RunningRiseCard } from '@/features/culture/components/running-rise-card';
+import { PhotoStrip } from '@/features/photos/components/photo-strip';
 import { useSignedInAccount } from '@/lib/auth/use-signed-in-account';
 import { useNow } from '@/lib/use-now';
 
@@ -69,6 +70,12 @@ function ClassCulture({ classId, cultureId }: { classId: string; cultureId: stri
       />
       {summary.data?.running && <RunningRiseCard running={summary.data.running} account={account} now={now} />}
       <RiseOverlayCard cultureId={cultureId} account={account} source={source} />
+      <PhotoStrip
+        cultureId={cultureId}
+        source={source}
+        feedingHref={(feedingId) => `/classes/${classId}/feedings/${feedingId}`}
+        readOnly
+      />
       {summary.data && (
         <KineticsCard
           kinetics={summary.data.kinetics}

@@ -15,6 +15,7 @@ import { CommentThread } from '@/features/comments/components/comment-thread';
 import { FeedingRecord } from '@/features/feeding-detail/components/feeding-record';
 import { RiseChecksCard } from '@/features/feeding-detail/components/rise-checks-card';
 import { formatWhen } from '@/features/feeding-detail/utils/feeding-words';
+import { PhotosCard } from '@/features/photos/components/photos-card';
 import { useSignedInAccount } from '@/lib/auth/use-signed-in-account';
 
 /** A student's feeding for the class's instructor: as recorded, its rise checks, and the thread. */
@@ -58,6 +59,7 @@ export function ClassFeedingRoute() {
         </CardContent>
       </Card>
       <RiseChecksCard feeding={f} account={account} readOnly={{ checks }} />
+      <PhotosCard subject={{ type: 'feeding', id: f.id }} readOnly />
       <CommentThread
         key={f.id}
         subject={{ type: 'feeding', id: f.id }}

@@ -15,6 +15,7 @@ import { LiveTimeline } from '@/features/bench/components/live-timeline';
 import { clockStyleFor, formatWhen, type ClockOptions } from '@/features/bench/utils/clock';
 import { useClassPlan } from '@/features/classroom/api/get-class-plan';
 import { CommentThread } from '@/features/comments/components/comment-thread';
+import { PhotosCard } from '@/features/photos/components/photos-card';
 import { useSignedInAccount } from '@/lib/auth/use-signed-in-account';
 import { useNow } from '@/lib/use-now';
 
@@ -93,6 +94,7 @@ export function ClassPlanRoute() {
         </Card>
         <Stack spacing={3} sx={{ flex: { md: '1 1 40%' }, minWidth: 0 }}>
           <BulkCard plan={p} account={account} clock={clock} now={now} active={false} />
+          <PhotosCard subject={{ type: 'bake-plan', id: p.id }} readOnly />
           <CommentThread
             key={p.id}
             id="comments"
