@@ -5,11 +5,12 @@ import { CultureFilesCard } from '@/features/transfer/components/culture-files-c
 
 export function CultureRoute() {
   const { id = '' } = useParams();
-  const extra = (
-    <>
-      <PhotoStrip cultureId={id} feedingHref={(feedingId) => `/feedings/${feedingId}`} />
-      <CultureFilesCard cultureId={id} />
-    </>
+  return (
+    <CulturePage
+      key={id}
+      cultureId={id}
+      besideCurves={<PhotoStrip cultureId={id} feedingHref={(feedingId) => `/feedings/${feedingId}`} />}
+      extra={<CultureFilesCard cultureId={id} />}
+    />
   );
-  return <CulturePage key={id} cultureId={id} extra={extra} />;
 }

@@ -14,12 +14,21 @@ import { LineageCard } from './lineage-card';
 import { RiseOverlayCard } from './rise-overlay-card';
 import { RunningRiseCard } from './running-rise-card';
 
-/** One culture: where it stands, this feeding's rise, how it answers to temperature, its history. */
 /**
- * `extra` is drawn at the end of the page: cards of other features (the route composes them), since
- * features never import each other.
+ * One culture: where it stands, this feeding's rise, how it answers to temperature, its history.
+ * Cards of other features come from the route (features never import each other): `besideCurves`
+ * right after the rise curves (the photo strip, so the jar's pictures sit by its curves), `extra`
+ * at the end of the page.
  */
-export function CulturePage({ cultureId, extra }: { cultureId: string; extra?: ReactNode }) {
+export function CulturePage({
+  cultureId,
+  besideCurves,
+  extra,
+}: {
+  cultureId: string;
+  besideCurves?: ReactNode;
+  extra?: ReactNode;
+}) {
   const account = useSignedInAccount();
   const culture = useCulture(cultureId);
   const summary = useCultureSummary(cultureId);
@@ -55,6 +64,7 @@ export function CulturePage({ cultureId, extra }: { cultureId: string; extra?: R
       />
       {summary.data?.running && <RunningRiseCard running={summary.data.running} account={account} now={now} />}
       <RiseOverlayCard cultureId={cultureId} account={account} />
+      {besideCurves}
       {summary.data && <KineticsCard kinetics={summary.data.kinetics} unit={account.temperatureUnit} />}
       <FeedingsTable cultureId={cultureId} account={account} />
       <LineageCard culture={c} />
