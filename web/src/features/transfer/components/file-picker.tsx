@@ -1,11 +1,9 @@
-import UploadFileOutlined from '@mui/icons-material/UploadFileOutlined';
 import Alert from '@mui/material/Alert';
-import Box from '@mui/material/Box';
-import Button from '@mui/material/Button';
 import Stack from '@mui/material/Stack';
 import Typography from '@mui/material/Typography';
 import { REQUEST_BODY_MAX_BYTES } from '@peakwise/shared';
-import { useState, type ChangeEvent } from 'react';
+import { useState } from 'react';
+import { CsvFileButton } from '@/components/form/csv-file-button';
 import { readHeaders } from '../utils/csv-header';
 import { requestBytes, SIZE_LIMIT_TEXT, sizeText } from '../utils/import-words';
 
@@ -49,12 +47,7 @@ interface FilePickerProps {
 export function FilePicker({ picked, onPicked, onPicking }: FilePickerProps) {
   const [error, setError] = useState<string | null>(null);
 
-  const onChange = async (event: ChangeEvent<HTMLInputElement>) => {
-    const input = event.currentTarget;
-    const file = input.files?.[0];
-    // Cleared, so choosing the same (now corrected) file again is noticed.
-    input.value = '';
-    if (!file) return;
+  const onFile = async (file: File) => {
     onPicking();
     setError(null);
     try {
@@ -66,37 +59,12 @@ export function FilePicker({ picked, onPicked, onPicking }: FilePickerProps) {
 
   return (
     <Stack spacing={1.5}>
-      {/* A label around the input opens the phone's file chooser; the input stays focusable for keyboards. */}
-      <Button
-        component="label"
-        role={undefined}
-        tabIndex={-1}
-        variant={picked ? 'outlined' : 'contained'}
-        size="large"
-        startIcon={<UploadFileOutlined />}
-        sx={{
-          minHeight: 56,
-          alignSelf: { xs: 'stretch', sm: 'start' },
-          '&:has(input:focus-visible)': { outline: 3, outlineOffset: 2, outlineColor: 'secondary.main' },
-        }}
-      >
-        {picked ? 'Choose another file' : 'Choose a CSV file'}
-        <Box
-          component="input"
-          type="file"
-          accept=".csv,text/csv,text/comma-separated-values,application/vnd.ms-excel,text/plain"
-          data-testid="csv-file"
-          onChange={(e: ChangeEvent<HTMLInputElement>) => void onChange(e)}
-          sx={{
-            position: 'absolute',
-            width: '1px',
-            height: '1px',
-            opacity: 0,
-            overflow: 'hidden',
-            clip: 'rect(0 0 0 0)',
-          }}
-        />
-      </Button>
+      <CsvFileButton
+        chosen={picked !== null}
+        accept=".csv,text/csv,text/comma-separated-values,application/vnd.ms-excel,text/plain"
+        testId="csv-file"
+        onFile={(file) => void onFile(file)}
+      />
       {picked && !error && (
         <Typography role="status">
           <strong>{picked.name}</strong> · {sizeText(picked.size)} · {picked.headers.length} columns
