@@ -48,7 +48,7 @@ function readFixture() {
   const { data } = Papa.parse<string[]>(text, { skipEmptyLines: 'greedy' });
   const guess = guessLoggerMapping(data.slice(0, 200), 'UTC');
   if (!guess.mapping) throw new Error('The sample file should be recognised');
-  const collector = new LoggerCollector(guess.mapping, { fedAtMs: Date.parse(FED_AT), nowMs: Date.now() });
+  const collector = new LoggerCollector(guess.mapping, { startMs: Date.parse(FED_AT), nowMs: Date.now() });
   data.slice(guess.headerRow + 1).forEach((cells, i) => collector.add(cells, guess.headerRow + 2 + i));
   return { guess, result: collector.result() };
 }

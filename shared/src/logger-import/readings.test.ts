@@ -12,7 +12,7 @@ function collect(name: string, fedAt: string, timeZone = 'UTC') {
   const rows = readSample(name);
   const guess = guessLoggerMapping(rows.slice(0, 200), timeZone);
   if (!guess.mapping) throw new Error('no mapping');
-  const collector = new LoggerCollector(guess.mapping, { fedAtMs: at(fedAt), nowMs: NOW });
+  const collector = new LoggerCollector(guess.mapping, { startMs: at(fedAt), nowMs: NOW });
   rows.slice(guess.headerRow + 1).forEach((cells, i) => collector.add(cells, guess.headerRow + 2 + i));
   return collector.result();
 }
@@ -26,7 +26,7 @@ describe('LoggerCollector', () => {
       dateFormat: 'iso',
       timeZone: 'UTC',
     };
-    const c = new LoggerCollector(mapping, { fedAtMs: at('2026-11-28T07:00:00Z'), nowMs: NOW });
+    const c = new LoggerCollector(mapping, { startMs: at('2026-11-28T07:00:00Z'), nowMs: NOW });
     c.add(['2026-11-28 07:10', '98.6'], 2);
     c.add(['2026-11-28 07:20', '32'], 3);
     c.add(['2026-11-28 07:30', '-4'], 4);
@@ -85,7 +85,7 @@ describe('LoggerCollector', () => {
       dateFormat: 'iso',
       timeZone: 'UTC',
     };
-    const c = new LoggerCollector(mapping, { fedAtMs: NOW - HOUR, nowMs: NOW });
+    const c = new LoggerCollector(mapping, { startMs: NOW - HOUR, nowMs: NOW });
     c.add(['2026-12-01 23:30', '20'], 2);
     c.add(['2026-12-02 00:30', '20'], 3);
     expect(c.result()).toMatchObject({ outside: 1, readings: [{ c: 20 }] });

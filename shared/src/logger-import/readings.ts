@@ -12,8 +12,8 @@ import {
 } from './types.js';
 
 // The rows of a file, one at a time (papaparse's `step` in the browser), into the readings of one
-// feeding: only those from fedAt to fedAt + LOGGER_WINDOW_HOURS (and not after `now`), in °C, at
-// most one per LOGGER_THIN_MINUTES. Memory stays at the window's size however long the file is.
+// feeding or bake: only those inside its window (a feeding: fedAt to fedAt + LOGGER_WINDOW_HOURS;
+// never after `now`), in °C, at most one per LOGGER_THIN_MINUTES. Memory stays at the window's size however long the file is.
 
 export interface LoggerReading {
   /** ms since the epoch. */
@@ -27,7 +27,7 @@ export interface LoggerCollection {
   readings: LoggerReading[];
   /** Rows read (after the header), blank rows not counted. */
   rows: number;
-  /** Readable rows outside fedAt … fedAt + window (or in the future). */
+  /** Readable rows outside the window (or in the future). */
   outside: number;
   /** Readable rows inside the window dropped because a kept reading was closer than LOGGER_THIN_MINUTES. */
   thinned: number;
@@ -36,8 +36,12 @@ export interface LoggerCollection {
   problemCount: number;
 }
 
+/** The stretch of time readings are kept from: a feeding's 48 h, or a bake's run. */
 export interface LoggerWindow {
-  fedAtMs: number;
+  /** The feeding's time, or the start of a bake's window. */
+  startMs: number;
+  /** Default LOGGER_WINDOW_HOURS (a feeding's). */
+  hours?: number;
   /** The server's clock is the judge; the browser's is close enough to leave out the future. */
   nowMs: number;
 }
@@ -55,7 +59,7 @@ export class LoggerCollector {
     private readonly mapping: LoggerMapping,
     private readonly window: LoggerWindow,
   ) {
-    this.endMs = Math.min(window.fedAtMs + LOGGER_WINDOW_HOURS * 3_600_000, window.nowMs);
+    this.endMs = Math.min(window.startMs + (window.hours ?? LOGGER_WINDOW_HOURS) * 3_600_000, window.nowMs);
   }
 
   private problem(line: number, message: string): void {
@@ -86,7 +90,7 @@ export class LoggerCollector {
       );
       return;
     }
-    if (ms < this.window.fedAtMs || ms > this.endMs) {
+    if (ms < this.window.startMs || ms > this.endMs) {
       this.outside++;
       return;
     }
@@ -100,9 +104,9 @@ export class LoggerCollector {
       return;
     }
     this.inside++;
-    // Buckets counted from fedAt, so the feeding's own start is a bucket edge; the earliest row of
+    // Buckets counted from the window's start, so the feeding's own time is a bucket edge; the earliest row of
     // each bucket is kept, whatever order the file lists them in.
-    const bucket = Math.floor((ms - this.window.fedAtMs) / (LOGGER_THIN_MINUTES * 60_000));
+    const bucket = Math.floor((ms - this.window.startMs) / (LOGGER_THIN_MINUTES * 60_000));
     const kept = this.byBucket.get(bucket);
     if (!kept || ms < kept.ms) this.byBucket.set(bucket, { ms, c: Math.round(c * 100) / 100 });
   }

@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { predictBulkEnd } from '../bulk/bulk-end.js';
+import { doughFromKitchen } from '../temperature/kitchen.js';
 import { addHours } from '../temperature/time.js';
 import { planBake } from './plan-bake.js';
 import { DOUGH, hours, input, ms, step } from './plan-test-helpers.js';
@@ -205,5 +206,42 @@ describe('replanBake', () => {
       forecast: [{ c: 26 }],
     });
     expect(hours(mix, live.bulk.endAt ?? '')).toBeCloseTo(e.hoursFromMix ?? NaN, 3);
+  });
+
+  describe('a kitchen logger series (the room, not the dough)', () => {
+    const mix = planned('mix').startAt;
+    const now = addHours(mix, 2);
+    const done = asPlanned('feed-starter', 'mix');
+    const room = (c: number) => Array.from({ length: 25 }, (_, i) => ({ at: addHours(mix, i / 12), c }));
+
+    it('a warm kitchen brings the bulk end forward, a cool one moves it later', () => {
+      const base = replanBake(input(), timing, { now, done });
+      const warm = replanBake(input(), timing, { now, done, kitchenTemperatures: room(29) });
+      const cool = replanBake(input(), timing, { now, done, kitchenTemperatures: room(19) });
+      expect(ms(warm.bulk.endAt ?? '')).toBeLessThan(ms(base.bulk.endAt ?? '') - 30 * 60_000);
+      expect(ms(cool.bulk.endAt ?? '')).toBeGreaterThan(ms(base.bulk.endAt ?? '') + 30 * 60_000);
+    });
+
+    it('is the oracle: predictBulkEnd on the dough series doughFromKitchen makes of it', () => {
+      const kitchenTemperatures = room(20);
+      const live = replanBake(input(), timing, { now, done, kitchenTemperatures });
+      const temperatures = doughFromKitchen({ kitchen: kitchenTemperatures, dough: [], mixMs: ms(mix), mixC: 24 });
+      const e = predictBulkEnd({ ...DOUGH, temperatureC: undefined, mixedAt: mix, temperatures }, {});
+      expect(hours(mix, live.bulk.endAt ?? '')).toBeCloseTo(e.hoursFromMix ?? NaN, 3);
+    });
+
+    it('a measured dough temperature outweighs the room at its time', () => {
+      const kitchenTemperatures = room(20);
+      const measured = [{ at: addHours(mix, 1.9), c: 27 }];
+      const roomOnly = replanBake(input(), timing, { now, done, kitchenTemperatures });
+      const both = replanBake(input(), timing, { now, done, kitchenTemperatures, doughTemperatures: measured });
+      expect(ms(both.bulk.endAt ?? '')).toBeLessThan(ms(roomOnly.bulk.endAt ?? ''));
+    });
+
+    it('names the reading when a room temperature is out of range', () => {
+      expect(() => replanBake(input(), timing, { now, done, kitchenTemperatures: [{ at: mix, c: 80 }] })).toThrow(
+        /progress\.kitchenTemperatures\.0\.c/,
+      );
+    });
   });
 });

@@ -2,6 +2,7 @@
 // bulk end (now from the logged dough temperatures and the aliquot jar, through predictBulkEnd)
 // and every step after them move; an action that is due but not done moves to "now".
 import { type AliquotReading } from '../bulk/types.js';
+import { doughFromKitchen } from '../temperature/kitchen.js';
 import { type TemperatureSample } from '../temperature/series.js';
 import { MS_PER_HOUR, parseMs } from '../temperature/time.js';
 import { BakersMathError, requireFinite } from '../units/bakers-math-error.js';
@@ -38,7 +39,7 @@ function item(value: unknown, path: string): Record<string, unknown> {
   return value as Record<string, unknown>;
 }
 
-function readLive(progress: PlanProgress): Live {
+function readLive(progress: PlanProgress): Live & { kitchen: TemperatureSample[] } {
   const p = item(progress, 'progress');
   const done = new Map<string, { start: number; end: number | null }>();
   list(p.done, 'progress.done').forEach((raw, i) => {
@@ -51,14 +52,8 @@ function readLive(progress: PlanProgress): Live {
       throw new BakersMathError(`${at}.endedAt`, `${at}.endedAt must not be before startedAt`);
     done.set(d.id, { start, end });
   });
-  const temperatures: TemperatureSample[] = list(p.doughTemperatures, 'progress.doughTemperatures').map((raw, i) => {
-    const at = `progress.doughTemperatures.${i}`;
-    const r = item(raw, at);
-    time(r.at, `${at}.at`);
-    const c = requireFinite(r.c, `${at}.c`);
-    if (c < -5 || c > 50) throw new BakersMathError(`${at}.c`, `${at}.c must be between -5 and 50 °C`);
-    return { at: r.at as string, c };
-  });
+  const temperatures = samples(p.doughTemperatures, 'progress.doughTemperatures');
+  const kitchen = samples(p.kitchenTemperatures, 'progress.kitchenTemperatures');
   const readings: AliquotReading[] = list(p.aliquotReadings, 'progress.aliquotReadings').map((raw, i) => {
     const at = `progress.aliquotReadings.${i}`;
     const r = item(raw, at);
@@ -67,7 +62,18 @@ function readLive(progress: PlanProgress): Live {
     if (risePct < 0 || risePct > 1000) throw new BakersMathError(`${at}.risePct`, `${at}.risePct must be 0–1000`);
     return { at: r.at as string, risePct };
   });
-  return { nowMs: time(p.now, 'progress.now'), done, temperatures, readings };
+  return { nowMs: time(p.now, 'progress.now'), done, temperatures, readings, kitchen };
+}
+
+function samples(value: unknown, path: string): TemperatureSample[] {
+  return list(value, path).map((raw, i) => {
+    const at = `${path}.${i}`;
+    const r = item(raw, at);
+    time(r.at, `${at}.at`);
+    const c = requireFinite(r.c, `${at}.c`);
+    if (c < -5 || c > 50) throw new BakersMathError(`${at}.c`, `${at}.c must be between -5 and 50 °C`);
+    return { at: r.at as string, c };
+  });
 }
 
 export function replanBake(input: PlanInput, timing: PlanTiming, progress: PlanProgress): LivePlan {
@@ -90,7 +96,17 @@ export function replanBake(input: PlanInput, timing: PlanTiming, progress: PlanP
   if (anchors.kind === 'overnight-retard' && anchors.bakeMs === null) {
     throw new BakersMathError('timing.bakeAt', 'timing.bakeAt is needed for a retard plan');
   }
-  const live = readLive(progress);
+  const { kitchen, ...live } = readLive(progress);
+  if (kitchen.length > 0) {
+    // The room series becomes the dough's estimated series from the mix on (the actual mix if
+    // checked off), starting at the dough temperature the plan assumed.
+    live.temperatures = doughFromKitchen({
+      kitchen,
+      dough: live.temperatures ?? [],
+      mixMs: live.done.get('mix')?.start ?? anchors.mixMs,
+      mixC: doughC ?? plan.doughC,
+    });
+  }
   const starter = plan.starter.skip ? null : starterPeakHours(plan);
   const timeline = buildTimeline(plan, starter, anchors, live);
   const quiet = planQuiet(plan);

@@ -231,6 +231,11 @@ export interface PlanProgress {
   now: string;
   done: DoneStep[];
   doughTemperatures?: TemperatureSample[];
+  /**
+   * The room, from a kitchen logger. The dough follows it slowly (doughFromKitchen); measured
+   * dough temperatures win at their times.
+   */
+  kitchenTemperatures?: TemperatureSample[];
   aliquotReadings?: AliquotReading[];
 }
 

@@ -80,7 +80,7 @@ export function LoggerImportPage({ feedingId }: { feedingId: string }) {
     forgetCheck();
     setChecking(true);
     try {
-      const window = { fedAtMs: Date.parse(fedAt), nowMs: Date.now() };
+      const window = { startMs: Date.parse(fedAt), nowMs: Date.now() };
       const [collection, existing] = await Promise.all([
         collectReadings(picked.file, picked.guess.headerRow, mapping, window),
         getReadingTimes(feedingId),
