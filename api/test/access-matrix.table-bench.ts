@@ -72,6 +72,18 @@ export const BENCH_ROUTES: Record<string, MatrixRoute> = {
     on: 'objects',
     path: (o) => `/api/plans/${o.planId}/readings/${o.planReadingId}`,
   },
+  'POST /api/plans/:id/kitchen-temperatures': {
+    access: OWNER_ONLY,
+    on: 'objects',
+    path: plan('/kitchen-temperatures'),
+    body: () => ({ readings: [{ takenAt: new Date(Date.now() - 1000).toISOString(), temperatureC: 21.5 }] }),
+  },
+  'GET /api/plans/:id/kitchen-temperatures': { access: OWNER_ONLY, on: 'objects', path: plan('/kitchen-temperatures') },
+  'DELETE /api/plans/:id/kitchen-temperatures': {
+    access: OWNER_ONLY,
+    on: 'objects',
+    path: plan('/kitchen-temperatures'),
+  },
   'POST /api/plans/:id/finish': {
     access: OWNER_ONLY,
     on: 'objects',

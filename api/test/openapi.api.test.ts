@@ -65,6 +65,7 @@ it('documents every route under /api', async () => {
       '/api/plans/{id}/calendar.ics',
       '/api/plans/{id}/finish',
       '/api/plans/{id}/readings',
+      '/api/plans/{id}/kitchen-temperatures',
       '/api/plans/{id}/readings/{readingId}',
       '/api/plans/{id}/steps/{stepId}/done',
       '/api/rise-checks/{id}',

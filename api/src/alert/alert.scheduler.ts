@@ -98,8 +98,7 @@ export class AlertScheduler {
       const row = await this.plans.findOwned(accountId, planId);
       if (!row) return;
       const now = this.clock.now();
-      const [checked, readings] = await Promise.all([this.plans.checkedSteps(planId), this.plans.readings(planId)]);
-      const steps = row.status === 'active' ? livePlan(row, checked, readings, now).steps : [];
+      const steps = row.status === 'active' ? livePlan(row, await this.plans.log(planId), now).steps : [];
       const wanted = planAlerts({
         accountId,
         plan: { id: row.id, name: row.name, status: row.status, steps },

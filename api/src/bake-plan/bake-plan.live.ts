@@ -5,14 +5,16 @@ import {
   type BakePlanView,
   type CheckedStep,
   type DoughReading,
+  type KitchenSummary,
   type LivePlan,
   type TemperatureSample,
 } from '@peakwise/shared';
-import type { BakePlanRow, CheckedStepRow, DoughReadingRow } from './bake-plan.repository.js';
+import type { BakePlanRow, CheckedStepRow, DoughReadingRow, PlanLog } from './bake-plan.repository.js';
 
 // The live Bench: the stored plan re-planned at "now" from what the baker checked off and logged.
-// Dough temperatures become the temperature series the model integrates; the aliquot jar's rise
-// becomes the readings that rescale the bulk.
+// Dough temperatures become the temperature series the model integrates (with a kitchen logger's
+// room series, the dough's estimated one); the aliquot jar's rise becomes the readings that
+// rescale the bulk.
 
 export function toCheckedStep(row: CheckedStepRow): CheckedStep {
   return { stepId: row.stepId, startedAt: row.startedAt.toISOString(), endedAt: row.endedAt?.toISOString() ?? null };
@@ -30,8 +32,7 @@ export function toDoughReading(row: DoughReadingRow): DoughReading {
 
 export function livePlan(
   row: Pick<BakePlanRow, 'input' | 'timing'>,
-  checked: CheckedStepRow[],
-  readings: DoughReadingRow[],
+  { checked, readings, kitchen }: PlanLog,
   now: Date,
 ): LivePlan {
   const doughTemperatures: TemperatureSample[] = readings.flatMap((r) =>
@@ -49,6 +50,7 @@ export function livePlan(
       ...(c.endedAt ? { endedAt: c.endedAt.toISOString() } : {}),
     })),
     doughTemperatures,
+    kitchenTemperatures: kitchen.map((k) => ({ at: k.takenAt.toISOString(), c: k.temperatureC })),
     aliquotReadings,
   });
 }
@@ -64,12 +66,15 @@ export function stepIdsOf(row: Pick<BakePlanRow, 'input'>, live: LivePlan): Set<
   return ids;
 }
 
-export function toView(
-  row: BakePlanRow,
-  checked: CheckedStepRow[],
-  readings: DoughReadingRow[],
-  now: Date,
-): BakePlanView {
+function kitchenSummary(kitchen: PlanLog['kitchen']): KitchenSummary | null {
+  const first = kitchen[0];
+  const last = kitchen[kitchen.length - 1];
+  if (!first || !last) return null;
+  return { count: kitchen.length, firstAt: first.takenAt.toISOString(), lastAt: last.takenAt.toISOString() };
+}
+
+export function toView(row: BakePlanRow, log: PlanLog, now: Date): BakePlanView {
+  const { checked, readings, kitchen } = log;
   return {
     id: row.id,
     name: row.name,
@@ -81,9 +86,10 @@ export function toView(
     settings: row.settings,
     timing: row.timing,
     kineticsBasis: row.kineticsBasis,
-    live: livePlan(row, checked, readings, now),
+    live: livePlan(row, log, now),
     checked: checked.map(toCheckedStep),
     readings: readings.map(toDoughReading),
+    kitchen: kitchenSummary(kitchen),
     dairyOrEgg: row.dairyOrEgg,
     notes: row.notes,
     rating: row.rating,

@@ -54,6 +54,18 @@ export interface DoughReadingRow {
   createdAt: Date;
 }
 
+export interface KitchenReadingRow {
+  takenAt: Date;
+  temperatureC: number;
+}
+
+/** Everything logged against a plan that the live re-plan reads. */
+export interface PlanLog {
+  checked: CheckedStepRow[];
+  readings: DoughReadingRow[];
+  kitchen: KitchenReadingRow[];
+}
+
 export interface PlanRecordChanges {
   name?: string;
   status?: BakePlanStatus;
@@ -182,6 +194,26 @@ export class BakePlanRepository {
       .where('stepId', '=', stepId)
       .executeTakeFirst();
     return result.numDeletedRows > 0n;
+  }
+
+  /** The check-offs, dough readings and kitchen series of a plan the caller may read. */
+  async log(planId: string): Promise<PlanLog> {
+    const [checked, readings, kitchen] = await Promise.all([
+      this.checkedSteps(planId),
+      this.readings(planId),
+      this.kitchenReadings(planId),
+    ]);
+    return { checked, readings, kitchen };
+  }
+
+  /** Oldest first. */
+  kitchenReadings(planId: string): Promise<KitchenReadingRow[]> {
+    return this.db
+      .selectFrom('kitchenReading')
+      .select(['takenAt', 'temperatureC'])
+      .where('planId', '=', planId)
+      .orderBy('takenAt')
+      .execute();
   }
 
   /** Oldest first. */

@@ -146,10 +146,10 @@ export class BakePlanService {
   }
 
   private async view(row: BakePlanRow): Promise<BakePlanView> {
-    const [checked, readings] = await Promise.all([this.plans.checkedSteps(row.id), this.plans.readings(row.id)]);
+    const log = await this.plans.log(row.id);
     // A closed plan is a record: its timeline stays as it stood when it was finished or cancelled.
     const at = row.finishedAt ?? row.cancelledAt ?? this.clock.now();
-    return toView(row, checked, readings, at);
+    return toView(row, log, at);
   }
 
   async update(account: AccountRecord, id: string, request: UpdateBakePlanRequest): Promise<BakePlanView> {
@@ -204,8 +204,7 @@ export class BakePlanService {
   private async requireStep(row: BakePlanRow, stepId: string): Promise<void> {
     const problem = 'This plan has no step with this id (e.g. mix, fold-1, bulk-end, bake).';
     if (!STEP_ID.test(stepId)) throw fieldError('stepId', problem);
-    const [checked, readings] = await Promise.all([this.plans.checkedSteps(row.id), this.plans.readings(row.id)]);
-    const live = livePlan(row, checked, readings, this.clock.now());
+    const live = livePlan(row, await this.plans.log(row.id), this.clock.now());
     if (!stepIdsOf(row, live).has(stepId)) throw fieldError('stepId', problem);
   }
 

@@ -88,6 +88,44 @@ export interface CreateDoughReadingRequest {
   risePct?: number;
 }
 
+/** A room temperature from a kitchen logger during the bake. */
+export interface KitchenReading {
+  takenAt: string;
+  temperatureC: number;
+}
+
+/**
+ * POST /api/plans/:id/kitchen-temperatures → 201 KitchenReadingsAdded. At most
+ * TEMPERATURE_READINGS_MAX_PER_REQUEST per request; a time already stored is skipped, so sending
+ * the same file again adds nothing. Not in the future; the plan may hold at most
+ * KITCHEN_READINGS_MAX_PER_PLAN.
+ */
+export interface CreateKitchenReadingsRequest {
+  readings: KitchenReading[];
+}
+
+export interface KitchenReadingsAdded {
+  /** New readings stored by this request (times already there are not counted). */
+  added: number;
+  /** The plan's readings after it. */
+  total: number;
+}
+
+/** GET /api/plans/:id/kitchen-temperatures → oldest first. DELETE the same path → 204, all gone. */
+export interface KitchenReadingListResponse {
+  items: KitchenReading[];
+}
+
+/** Three days at one reading a minute: more than a bake needs, with thinning at 5 min far more. */
+export const KITCHEN_READINGS_MAX_PER_PLAN = 4320;
+
+/** What the plan has from a kitchen logger, in short. */
+export interface KitchenSummary {
+  count: number;
+  firstAt: string;
+  lastAt: string;
+}
+
 /**
  * POST /api/plans/:id/steps/:stepId/done → 201 CheckedStep. Neither time: done now, taking no time;
  * startedAt only: it took its planned length; endedAt only: it took no time. Again for the same
@@ -136,6 +174,8 @@ export interface BakePlanView {
   live: LivePlan;
   checked: CheckedStep[];
   readings: DoughReading[];
+  /** The kitchen logger's series, when one was imported; the live plan integrates it. */
+  kitchen: KitchenSummary | null;
   /** Bread with milk, butter or eggs: the room-temperature caution applies. */
   dairyOrEgg: boolean;
   notes: string | null;

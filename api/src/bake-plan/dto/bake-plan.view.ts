@@ -1,3 +1,4 @@
+import { KitchenSummaryView } from './kitchen-reading.view.js';
 import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
 import {
   BAKE_PLAN_STATUSES,
@@ -189,6 +190,8 @@ export class BakePlanViewDoc implements BakePlanView {
   @ApiProperty({ type: LivePlanDoc }) live: LivePlanDoc;
   @ApiProperty({ type: [CheckedStepView] }) checked: CheckedStepView[];
   @ApiProperty({ type: [DoughReadingView] }) readings: DoughReadingView[];
+  @ApiProperty({ type: KitchenSummaryView, nullable: true, description: 'The kitchen logger’s series, if any' })
+  kitchen: KitchenSummaryView | null;
   @ApiProperty() dairyOrEgg: boolean;
   @ApiProperty({ type: String, nullable: true }) notes: string | null;
   @ApiProperty({ type: Number, nullable: true }) rating: number | null;
