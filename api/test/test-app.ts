@@ -78,7 +78,7 @@ export async function resetDatabase(db: Database): Promise<void> {
       await sql`TRUNCATE account, session, culture, feeding, rise_check, temperature_reading, idempotency_key,
         formula, formula_ingredient, formula_blend_flour, bake_plan, bake_plan_step, dough_reading,
         alert, alert_delivery, alert_preference, account_token, push_subscription, baking_class, class_member,
-        class_invite, comment, photo, photo_object_trash`.execute(db);
+        class_invite, comment, photo, photo_object_trash, kitchen_reading, auth_throttle, sign_in_address`.execute(db);
       return;
     } catch (error) {
       if ((error as { code?: string }).code !== '40P01' || attempt >= 5) throw error;

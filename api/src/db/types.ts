@@ -258,6 +258,13 @@ export interface IdempotencyKey {
   statusCode: number | null;
 }
 
+export interface KitchenReading {
+  createdAt: Generated<Timestamp>;
+  planId: string;
+  takenAt: Timestamp;
+  temperatureC: number;
+}
+
 export interface Photo {
   accountId: string;
   bakePlanId: string | null;
@@ -270,6 +277,7 @@ export interface Photo {
   id: Generated<string>;
   riseCheckId: string | null;
   subjectType: string;
+  takenAt: Timestamp | null;
   thumbnailKey: string;
   width: number;
 }
@@ -341,6 +349,7 @@ export interface DB {
   formulaBlendFlour: FormulaBlendFlour;
   formulaIngredient: FormulaIngredient;
   idempotencyKey: IdempotencyKey;
+  kitchenReading: KitchenReading;
   photo: Photo;
   photoObjectTrash: PhotoObjectTrash;
   pushSubscription: PushSubscription;
