@@ -24,3 +24,19 @@ describe('requestHash', () => {
     expect(requestHash(undefined)).toBe(requestHash(null));
   });
 });
+
+describe('canonicalJson of deep bodies', () => {
+  // Found by the write-route fuzz (test/fuzz-routes.api.test.ts): a JSON body nested 10,000 deep
+  // overflowed the recursive version, and every idempotent write answered 500.
+  it('writes a body nested 10,000 deep without overflowing the stack', () => {
+    const depth = 10_000;
+    const text = '['.repeat(depth) + ']'.repeat(depth);
+    expect(canonicalJson(JSON.parse(text))).toBe(text);
+    const objects = '{"a":'.repeat(depth) + '1' + '}'.repeat(depth);
+    expect(canonicalJson(JSON.parse(objects))).toBe(objects);
+  });
+
+  it('matches JSON.stringify on arrays with holes and undefined members', () => {
+    expect(canonicalJson({ a: [1, undefined, { c: undefined, b: [] }], z: undefined })).toBe('{"a":[1,null,{"b":[]}]}');
+  });
+});
