@@ -25,11 +25,13 @@ export type Timestamp = ColumnType<Date, Date | string, Date | string>;
 
 export interface Account {
   createdAt: Generated<Timestamp>;
+  disabledAt: Timestamp | null;
   displayName: string;
   email: string;
   id: Generated<string>;
   passwordHash: string;
   role: Generated<import('@peakwise/shared').Role>;
+  sessionEpoch: Generated<number>;
   temperatureUnit: Generated<import('@peakwise/shared').TemperatureUnit>;
   timeZone: Generated<string>;
   unitSystem: Generated<import('@peakwise/shared').UnitSystem>;
@@ -98,6 +100,13 @@ export interface AppSecret {
   createdAt: Generated<Timestamp>;
   name: string;
   value: Json;
+}
+
+export interface AuthThrottle {
+  blockedUntil: Timestamp | null;
+  expiresAt: Timestamp;
+  hits: number;
+  key: string;
 }
 
 export interface BakePlan {
@@ -321,6 +330,12 @@ export interface Session {
   sid: string;
 }
 
+export interface SignInAddress {
+  accountId: string;
+  address: string;
+  lastSignedInAt: Generated<Timestamp>;
+}
+
 export interface TemperatureReading {
   createdAt: Generated<Timestamp>;
   feedingId: string;
@@ -336,6 +351,7 @@ export interface DB {
   alertDelivery: AlertDelivery;
   alertPreference: AlertPreference;
   appSecret: AppSecret;
+  authThrottle: AuthThrottle;
   bakePlan: BakePlan;
   bakePlanStep: BakePlanStep;
   bakingClass: BakingClass;
@@ -356,5 +372,6 @@ export interface DB {
   riseCheck: RiseCheck;
   schemaMigration: SchemaMigration;
   session: Session;
+  signInAddress: SignInAddress;
   temperatureReading: TemperatureReading;
 }
