@@ -1,3 +1,4 @@
+import { OutboxRunner } from '@/lib/outbox/outbox-runner';
 import { AppProvider } from './provider';
 import { AppRouter } from './router';
 
@@ -5,6 +6,7 @@ export function App() {
   return (
     <AppProvider>
       <AppRouter />
+      <OutboxRunner />
     </AppProvider>
   );
 }

@@ -6,6 +6,7 @@ import { Link as RouterLink } from 'react-router-dom';
 import { Wordmark } from '@/components/brand/wordmark';
 import { AlertBell } from '@/lib/alerts/alert-bell';
 import { AccountMenu } from './account-menu';
+import { OutboxIndicator } from './outbox-indicator';
 
 export function TopBar() {
   return (
@@ -20,6 +21,7 @@ export function TopBar() {
           <Wordmark onDark />
         </Link>
         <Box sx={{ flexGrow: 1 }} />
+        <OutboxIndicator />
         <AlertBell />
         <AccountMenu />
       </Toolbar>

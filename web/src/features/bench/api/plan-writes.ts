@@ -9,6 +9,8 @@ import type {
 } from '@peakwise/shared';
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { api } from '@/lib/api-client';
+import { useCurrentAccount } from '@/lib/auth/current-account';
+import { sendOrHold } from '@/lib/outbox/outbox';
 import { benchKeys } from './query-keys';
 
 // The writes on one plan. Each refreshes the plan (re-planned by the server on read) and the list
@@ -48,10 +50,29 @@ function useRefreshing<V>(fn: (vars: V) => Promise<unknown>) {
 
 type Headers = { headers: Record<string, string> };
 
+/** Resolves to the check-off, or undefined when it was kept in the outbox to send later. */
 export function useCheckOffStep(id: string) {
-  return useRefreshing(({ stepId, body, headers }: { stepId: string; body: CheckOffStepRequest } & Headers) =>
-    checkOffStep(id, stepId, body, headers),
-  );
+  const queryClient = useQueryClient();
+  const accountId = useCurrentAccount().data?.id;
+  return useMutation({
+    // Offline the check-off goes to the outbox instead of waiting for a signal.
+    networkMode: 'always',
+    mutationFn: ({ stepId, body, headers }: { stepId: string; body: CheckOffStepRequest } & Headers) =>
+      sendOrHold(
+        {
+          accountId,
+          kind: 'step-done',
+          path: path(id, `/steps/${encodeURIComponent(stepId)}/done`),
+          body,
+          headers,
+          openPath: `/bench/${encodeURIComponent(id)}`,
+          // Without times the server would take the moment it arrives as the moment it was done.
+          stamped: (savedAt) => (body.startedAt || body.endedAt ? body : { startedAt: savedAt, endedAt: savedAt }),
+        },
+        (h) => checkOffStep(id, stepId, body, h),
+      ),
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: benchKeys.all }),
+  });
 }
 
 export function useUndoStep(id: string) {

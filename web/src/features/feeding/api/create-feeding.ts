@@ -1,7 +1,11 @@
 import type { CreateFeedingRequest, Feeding } from '@peakwise/shared';
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { api } from '@/lib/api-client';
+import { useCurrentAccount } from '@/lib/auth/current-account';
 import { logbookKeys } from '@/lib/logbook/query-keys';
+import { sendOrHold } from '@/lib/outbox/outbox';
+
+const feedingsPath = (cultureId: string) => `/cultures/${encodeURIComponent(cultureId)}/feedings`;
 
 /** POST /api/cultures/:cultureId/feedings → 201 Feeding. */
 export function createFeeding(
@@ -9,14 +13,29 @@ export function createFeeding(
   body: CreateFeedingRequest,
   headers: Record<string, string>,
 ): Promise<Feeding> {
-  return api.post<Feeding>(`/cultures/${encodeURIComponent(cultureId)}/feedings`, body, headers);
+  return api.post<Feeding>(feedingsPath(cultureId), body, headers);
 }
 
+/** Resolves to the new feeding, or undefined when it was kept in the outbox to send later. */
 export function useCreateFeeding(cultureId: string) {
   const queryClient = useQueryClient();
+  const accountId = useCurrentAccount().data?.id;
   return useMutation({
+    // Offline the write goes to the outbox instead of waiting for a signal.
+    networkMode: 'always',
     mutationFn: ({ body, headers }: { body: CreateFeedingRequest; headers: Record<string, string> }) =>
-      createFeeding(cultureId, body, headers),
+      sendOrHold(
+        {
+          accountId,
+          kind: 'feeding',
+          path: feedingsPath(cultureId),
+          body,
+          headers,
+          openPath: `/cultures/${encodeURIComponent(cultureId)}`,
+          stamped: (savedAt) => ({ ...body, fedAt: body.fedAt ?? savedAt }),
+        },
+        (h) => createFeeding(cultureId, body, h),
+      ),
     // The summary (state, first prediction) and the feedings table change with a new feeding.
     onSuccess: () => queryClient.invalidateQueries({ queryKey: logbookKeys.all }),
   });

@@ -24,7 +24,8 @@ interface LogFeedingFormProps {
   culture: Culture;
   last: Feeding | undefined;
   account: Account;
-  onSaved: (feeding: Feeding) => void;
+  /** `undefined`: kept on this device (offline) and sent later. */
+  onSaved: (feeding: Feeding | undefined) => void;
 }
 
 export function LogFeedingForm({ culture, last, account, onSaved }: LogFeedingFormProps) {
