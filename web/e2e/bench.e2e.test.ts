@@ -182,7 +182,7 @@ describe('Bench on a phone', () => {
     await bulk.getByRole('button', { name: 'Log reading now' }).click();
     await bulk.getByTestId('dough-reading').first().waitFor();
     expect(await bulk.getByTestId('dough-reading').first().innerText()).toContain('25.5 °C');
-    await bulk.getByText('From 1 reading of the dough.').waitFor();
+    await bulk.getByText('Estimated from your dough temperatures and 1 reading of the jar’s rise.').waitFor();
     await tallShot(page, 'bench-live.png');
 
     // The calendar file: RFC 5545, one event per step.

@@ -98,6 +98,10 @@ function createAppRouter() {
                       path: ':id',
                       lazy: async () => ({ Component: (await import('./routes/bench-plan')).BenchPlanRoute }),
                     },
+                    {
+                      path: ':id/kitchen/import',
+                      lazy: async () => ({ Component: (await import('./routes/kitchen-import')).KitchenImportRoute }),
+                    },
                   ],
                 },
                 {

@@ -11,6 +11,7 @@ import { LoadError } from '@/components/feedback/load-error';
 import { PageLoader } from '@/components/feedback/page-loader';
 import { Page } from '@/components/layout/page';
 import { BulkCard } from '@/features/bench/components/bulk-card';
+import { KitchenCard } from '@/features/bench/components/kitchen-card';
 import { LiveTimeline } from '@/features/bench/components/live-timeline';
 import { clockStyleFor, formatWhen, type ClockOptions } from '@/features/bench/utils/clock';
 import { useClassPlan } from '@/features/classroom/api/get-class-plan';
@@ -94,6 +95,7 @@ export function ClassPlanRoute() {
         </Card>
         <Stack spacing={3} sx={{ flex: { md: '1 1 40%' }, minWidth: 0 }}>
           <BulkCard plan={p} account={account} clock={clock} now={now} active={false} />
+          <KitchenCard plan={p} clock={clock} now={now} editable={false} />
           <PhotosCard subject={{ type: 'bake-plan', id: p.id }} readOnly />
           <CommentThread
             key={p.id}

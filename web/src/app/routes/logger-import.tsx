@@ -1,7 +1,7 @@
 import { useParams } from 'react-router-dom';
-import { LoggerImportPage } from '@/features/logger-import/components/logger-import-page';
+import { FeedingLoggerImportPage } from '@/features/logger-import/components/feeding-logger-import';
 
 export function LoggerImportRoute() {
   const { id = '' } = useParams();
-  return <LoggerImportPage key={id} feedingId={id} />;
+  return <FeedingLoggerImportPage key={id} feedingId={id} />;
 }

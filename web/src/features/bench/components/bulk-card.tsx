@@ -34,6 +34,23 @@ function estimateWords(plan: BakePlanView, clock: ClockOptions, now: Date): stri
   return `Bulk ends about ${when}.`;
 }
 
+/** What the estimate rests on: temperatures (planned, measured, the kitchen's) and the jar. */
+function basisWords(plan: BakePlanView, unit: Account['temperatureUnit']): string {
+  const measured = plan.readings.some((r) => r.temperatureC !== null);
+  const jar = plan.live.bulk.readingsUsed;
+  if (!measured && !plan.kitchen && jar === 0) {
+    const planned = plan.live.timing.doughTemperatureC ?? plan.settings.doughTemperatureC;
+    return `No readings yet: estimated at the planned dough temperature (${formatTemperature(planned, unit)}).`;
+  }
+  const temperatures = plan.kitchen
+    ? `the kitchen logger’s room temperatures${measured ? ' and your dough temperatures' : ''}`
+    : measured
+      ? 'your dough temperatures'
+      : null;
+  const jarWords = jar > 0 ? `${jar} ${jar === 1 ? 'reading' : 'readings'} of the jar’s rise` : null;
+  return `Estimated from ${[temperatures, jarWords].filter(Boolean).join(' and ')}.`;
+}
+
 /** The bulk estimate, what it rests on, and the dough readings that move it. */
 export function BulkCard({ plan, account, clock, now, active }: Props) {
   const create = useCreateReading(plan.id);
@@ -82,9 +99,7 @@ export function BulkCard({ plan, account, clock, now, active }: Props) {
           </Typography>
           <Typography sx={{ fontWeight: 500 }}>{estimateWords(plan, clock, now)}</Typography>
           <Typography variant="body2" color="text.secondary">
-            {bulk.readingsUsed === 0
-              ? `No readings yet: estimated at the planned dough temperature (${formatTemperature(plan.live.timing.doughTemperatureC ?? plan.settings.doughTemperatureC, tUnit)}).`
-              : `From ${bulk.readingsUsed} ${bulk.readingsUsed === 1 ? 'reading' : 'readings'} of the dough.`}
+            {basisWords(plan, tUnit)}
             {pace && ` The dough is rising ${bulk.rateScale.toFixed(1)}× as fast as expected.`}
             {bulk.low && bulk.high && ' The range is where 8 in 10 bulks like this end.'}
           </Typography>

@@ -22,6 +22,7 @@ import { stepTitle } from '../utils/step-words';
 import { allDone } from '../utils/timeline';
 import { BulkCard } from './bulk-card';
 import { FinishForm } from './finish-form';
+import { KitchenCard } from './kitchen-card';
 import { LiveTimeline } from './live-timeline';
 import { PlanActions } from './plan-actions';
 
@@ -147,6 +148,7 @@ function LivePlan({ plan, account }: { plan: BakePlanView; account: Account }) {
             <FinishForm plan={plan} clock={clock} now={now} unitSystem={account.unitSystem} />
           )}
           <BulkCard plan={plan} account={account} clock={clock} now={now} active={active} />
+          <KitchenCard plan={plan} clock={clock} now={now} editable />
           <PlanActions plan={plan} active={active} />
         </Stack>
       </Stack>

@@ -1,13 +1,14 @@
 import {
   batches,
   TEMPERATURE_READINGS_MAX_PER_REQUEST,
+  type KitchenReadingListResponse,
+  type KitchenReadingsAdded,
   type LoggerReading,
   type TemperatureReadingBatchResponse,
+  type TemperatureReadingListResponse,
   IDEMPOTENCY_KEY_HEADER,
 } from '@peakwise/shared';
-import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { api } from '@/lib/api-client';
-import { logbookKeys } from '@/lib/logbook/query-keys';
 
 export interface AddProgress {
   /** Batches already stored, so a retry after a lost connection starts at the next one. */
@@ -23,9 +24,20 @@ export function newProgress(readings: number): AddProgress {
   return { done: 0, keys: Array.from({ length: count }, () => crypto.randomUUID()), added: 0 };
 }
 
-/** POST /api/feedings/:feedingId/temperatures, one request per TEMPERATURE_READINGS_MAX_PER_REQUEST readings. */
+/** Where a logger's readings go: a feeding (the jar's air) or a bake (the kitchen's). */
+export interface ReadingsTarget {
+  /** Stores one batch; answers how many of it were new. */
+  post(
+    body: { readings: { takenAt: string; temperatureC: number }[] },
+    headers: Record<string, string>,
+  ): Promise<number>;
+  /** The instants (ms) already stored, so importing the same file twice adds nothing the second time. */
+  existingTimes(): Promise<Set<number>>;
+}
+
+/** One request per TEMPERATURE_READINGS_MAX_PER_REQUEST readings, resuming where `progress` stopped. */
 export async function addReadings(
-  feedingId: string,
+  target: ReadingsTarget,
   readings: readonly LoggerReading[],
   progress: AddProgress,
 ): Promise<number> {
@@ -33,24 +45,32 @@ export async function addReadings(
   for (let i = progress.done; i < parts.length; i++) {
     const part = parts[i] ?? [];
     const body = { readings: part.map((r) => ({ takenAt: new Date(r.ms).toISOString(), temperatureC: r.c })) };
-    const answer = await api.post<TemperatureReadingBatchResponse>(
-      `/feedings/${encodeURIComponent(feedingId)}/temperatures`,
-      body,
-      { [IDEMPOTENCY_KEY_HEADER]: progress.keys[i] ?? crypto.randomUUID() },
-    );
-    progress.added += answer.items.length;
+    progress.added += await target.post(body, { [IDEMPOTENCY_KEY_HEADER]: progress.keys[i] ?? crypto.randomUUID() });
     progress.done = i + 1;
   }
   return progress.added;
 }
 
-export function useAddReadings(feedingId: string) {
-  const queryClient = useQueryClient();
-  return useMutation({
-    mutationFn: ({ readings, progress }: { readings: readonly LoggerReading[]; progress: AddProgress }) =>
-      addReadings(feedingId, readings, progress),
-    // The model integrates the readings, so the forecast and the feeding page change with them;
-    // after a failed batch too, since the batches before it were stored.
-    onSettled: () => queryClient.invalidateQueries({ queryKey: logbookKeys.all }),
-  });
+const timesOf = (items: { takenAt: string }[]) => new Set(items.map((r) => Date.parse(r.takenAt)));
+
+/** POST /api/feedings/:feedingId/temperatures; GET the same for what is there (one page of the
+ * list's largest size: an import adds at most 577 readings, 48 h at one per 5 min). */
+export function feedingTarget(feedingId: string): ReadingsTarget {
+  const url = `/feedings/${encodeURIComponent(feedingId)}/temperatures`;
+  return {
+    post: async (body, headers) => (await api.post<TemperatureReadingBatchResponse>(url, body, headers)).items.length,
+    existingTimes: async () =>
+      timesOf(
+        (await api.get<TemperatureReadingListResponse>(`${url}?limit=${TEMPERATURE_READINGS_MAX_PER_REQUEST}`)).items,
+      ),
+  };
+}
+
+/** POST /api/plans/:id/kitchen-temperatures (times already there are skipped by the server too). */
+export function kitchenTarget(planId: string): ReadingsTarget {
+  const url = `/plans/${encodeURIComponent(planId)}/kitchen-temperatures`;
+  return {
+    post: async (body, headers) => (await api.post<KitchenReadingsAdded>(url, body, headers)).added,
+    existingTimes: async () => timesOf((await api.get<KitchenReadingListResponse>(url)).items),
+  };
 }

@@ -9,24 +9,25 @@ import Typography from '@mui/material/Typography';
 import type { LoggerCollection, LoggerReading } from '@peakwise/shared';
 import { useEffect, useRef } from 'react';
 import { Link as RouterLink } from 'react-router-dom';
-import { checkedText, readingsText } from '../utils/logger-words';
+import { checkedText, readingsText, type LoggerPlace } from '../utils/logger-words';
 
 export interface Checked {
   collection: LoggerCollection;
-  /** The readings not already on the feeding: what is sent. */
+  /** The readings not already on the feeding or bake: what is sent. */
   fresh: LoggerReading[];
   alreadyThere: number;
 }
 
 interface CheckSummaryProps {
   checked: Checked;
+  place: LoggerPlace;
   adding: boolean;
   onConfirm: () => void;
   back: string;
 }
 
 /** What the whole file gave: counts, the rows that could not be read (by line), and the confirm button. */
-export function CheckSummary({ checked, adding, onConfirm, back }: CheckSummaryProps) {
+export function CheckSummary({ checked, place, adding, onConfirm, back }: CheckSummaryProps) {
   const { collection, fresh, alreadyThere } = checked;
   const ref = useRef<HTMLDivElement>(null);
   // The outcome appears below the button the thumb just pressed; bring it into view.
@@ -43,7 +44,7 @@ export function CheckSummary({ checked, adding, onConfirm, back }: CheckSummaryP
           3. Add the readings
         </Typography>
         <Box component="ul" sx={{ m: 0, pl: 2.5, display: 'grid', gap: 0.5 }} data-testid="logger-check">
-          {checkedText(collection, alreadyThere).map((line) => (
+          {checkedText(collection, alreadyThere, place).map((line) => (
             <li key={line}>{line}</li>
           ))}
         </Box>
@@ -74,8 +75,8 @@ export function CheckSummary({ checked, adding, onConfirm, back }: CheckSummaryP
           </Stack>
         ) : (
           <Alert severity="info">
-            Nothing to add: no reading of this file falls between the feeding and 48 h after, or they are all there
-            already. Check the time zone and date format above.
+            Nothing to add: no reading of this file falls in this {place}’s time, or they are all there already. Check
+            the time zone and date format above.
           </Alert>
         )}
       </CardContent>

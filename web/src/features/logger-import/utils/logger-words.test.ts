@@ -27,6 +27,16 @@ describe('logger import words', () => {
     expect(lines.slice(1).map((l) => l.split(' ')[0])).toEqual(['5', '12', '1']);
   });
 
+  it('names the bake’s window for a bake', () => {
+    const readings = [{ ms: 0, c: 20 }];
+    const lines = checkedText(collection({ readings, rows: 9, outside: 8 }), 1, 'bake');
+    expect(lines[1]).toBe(
+      '8 readings outside this bake’s time (from an hour before the mix to the bread being ready) left out.',
+    );
+    expect(lines[2]).toBe('1 reading already on this bake left as it is.');
+    expect(addedText(3, 2, 'bake')).toBe('3 readings added; 2 outside this bake’s time left out.');
+  });
+
   it('writes file sizes in KB and MB', () => {
     expect(fileSizeText(48 * 1024)).toBe('48 KB');
     expect(fileSizeText(15.3 * 1024 * 1024)).toBe('15.3 MB');

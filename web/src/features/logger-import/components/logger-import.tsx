@@ -3,19 +3,16 @@ import Button from '@mui/material/Button';
 import Card from '@mui/material/Card';
 import CardContent from '@mui/material/CardContent';
 import Typography from '@mui/material/Typography';
-import { guessLoggerMapping, type LoggerGuess, type LoggerMapping } from '@peakwise/shared';
+import { guessLoggerMapping, type LoggerGuess, type LoggerMapping, type LoggerReading } from '@peakwise/shared';
 import { useRef, useState } from 'react';
 import { Link as RouterLink } from 'react-router-dom';
-import { LoadError } from '@/components/feedback/load-error';
-import { PageLoader } from '@/components/feedback/page-loader';
+import { useMutation } from '@tanstack/react-query';
 import { Page } from '@/components/layout/page';
-import { useFeeding } from '@/features/feeding-detail/api/get-feeding';
 import { isApiError } from '@/lib/api-client';
 import { useSignedInAccount } from '@/lib/auth/use-signed-in-account';
-import { newProgress, useAddReadings, type AddProgress } from '../api/add-readings';
-import { getReadingTimes } from '../api/get-reading-times';
+import { addReadings, newProgress, type AddProgress, type ReadingsTarget } from '../api/add-readings';
 import { collectReadings, readFirstRows, type NumberedRow } from '../utils/read-logger-file';
-import { addedText } from '../utils/logger-words';
+import { addedText, type LoggerPlace } from '../utils/logger-words';
 import { CheckSummary, type Checked } from './check-summary';
 import { LoggerFilePicker } from './logger-file-picker';
 import { MappingFields } from './mapping-fields';
@@ -28,14 +25,41 @@ interface Picked {
   sample: NumberedRow[];
 }
 
+/** Where the readings go and the words around it. */
+export interface LoggerImportPlace {
+  place: LoggerPlace;
+  target: ReadingsTarget;
+  /** The readings kept: from startMs for `hours` (never after now). */
+  window: { startMs: number; hours: number };
+  intro: string;
+  back: string;
+  backLabel: string;
+  /** After "N readings added.": where they show and what uses them. */
+  doneTail: string;
+  /** Called after every attempt (batches before a failure were stored). */
+  onSettled: () => void;
+}
+
 /**
- * A kitchen logger's CSV onto one feeding: choose the file, confirm which column is which, check
- * it (the whole file is read here, nothing sent), then add the readings.
+ * A kitchen logger's CSV onto a feeding or a bake: choose the file, confirm which column is
+ * which, check it (the whole file is read here, nothing sent), then add the readings.
  */
-export function LoggerImportPage({ feedingId }: { feedingId: string }) {
+export function LoggerImport({
+  place,
+  target,
+  window: span,
+  intro,
+  back,
+  backLabel,
+  doneTail,
+  onSettled,
+}: LoggerImportPlace) {
   const account = useSignedInAccount();
-  const feeding = useFeeding(feedingId);
-  const adder = useAddReadings(feedingId);
+  const adder = useMutation({
+    mutationFn: ({ readings, progress }: { readings: readonly LoggerReading[]; progress: AddProgress }) =>
+      addReadings(target, readings, progress),
+    onSettled,
+  });
   const [picked, setPicked] = useState<Picked | null>(null);
   const [mapping, setMapping] = useState<LoggerMapping | null>(null);
   const [checking, setChecking] = useState(false);
@@ -43,11 +67,6 @@ export function LoggerImportPage({ feedingId }: { feedingId: string }) {
   const [failure, setFailure] = useState<string | null>(null);
   const [done, setDone] = useState<{ added: number; outside: number } | null>(null);
   const progress = useRef<AddProgress | null>(null);
-
-  if (feeding.isPending) return <PageLoader />;
-  if (feeding.isError) return <LoadError error={feeding.error} onRetry={() => void feeding.refetch()} />;
-  const fedAt = feeding.data.fedAt;
-  const back = `/feedings/${feedingId}`;
 
   const forgetCheck = () => {
     setChecked(null);
@@ -80,10 +99,10 @@ export function LoggerImportPage({ feedingId }: { feedingId: string }) {
     forgetCheck();
     setChecking(true);
     try {
-      const window = { startMs: Date.parse(fedAt), nowMs: Date.now() };
+      const window = { ...span, nowMs: Date.now() };
       const [collection, existing] = await Promise.all([
         collectReadings(picked.file, picked.guess.headerRow, mapping, window),
-        getReadingTimes(feedingId),
+        target.existingTimes(),
       ]);
       const fresh = collection.readings.filter((r) => !existing.has(r.ms));
       setChecked({ collection, fresh, alreadyThere: collection.readings.length - fresh.length });
@@ -118,11 +137,10 @@ export function LoggerImportPage({ feedingId }: { feedingId: string }) {
     return (
       <Page title={title}>
         <Alert severity="success" role="status" data-testid="logger-import-done">
-          {addedText(done.added, done.outside)} They are on the feeding’s temperature card, and the model integrates
-          them.
+          {addedText(done.added, done.outside, place)} {doneTail}
         </Alert>
         <Button component={RouterLink} to={back} variant="contained" size="large" sx={{ alignSelf: 'start' }}>
-          Back to the feeding
+          {backLabel}
         </Button>
       </Page>
     );
@@ -130,10 +148,7 @@ export function LoggerImportPage({ feedingId }: { feedingId: string }) {
 
   const header = picked && mapping ? picked.guess.headers : [];
   return (
-    <Page
-      title={title}
-      intro="A CSV from a kitchen temperature logger: one column of times, one of temperatures. The readings from this feeding to 48 h after are added to it, and the forecast integrates them."
-    >
+    <Page title={title} intro={intro}>
       <Card component="section" aria-labelledby="logger-file-heading">
         <CardContent sx={{ display: 'grid', gap: 2 }}>
           <Typography id="logger-file-heading" variant="h2">
@@ -190,7 +205,13 @@ export function LoggerImportPage({ feedingId }: { feedingId: string }) {
         </Alert>
       )}
       {checked && (
-        <CheckSummary checked={checked} adding={adder.isPending} onConfirm={() => void confirm()} back={back} />
+        <CheckSummary
+          checked={checked}
+          place={place}
+          adding={adder.isPending}
+          onConfirm={() => void confirm()}
+          back={back}
+        />
       )}
     </Page>
   );
