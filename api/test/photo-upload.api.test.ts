@@ -15,6 +15,7 @@ import {
   exifGpsLatitude,
   image,
   jpegTurnedSideways,
+  jpegTakenAt,
   jpegWithGps,
   multipart,
   pixelFloodPng,
@@ -50,7 +51,9 @@ beforeEach(async () => {
 });
 
 function call(method: 'GET' | 'POST' | 'PATCH' | 'DELETE', url: string, payload?: unknown) {
-  return t.app.inject({ method, url, payload: payload as never, headers: { cookie: theo.cookie } });
+  // Log writes carry an Idempotency-Key (a fresh one: these are first tries).
+  const key = method === 'POST' || method === 'PATCH' ? { 'idempotency-key': crypto.randomUUID() } : {};
+  return t.app.inject({ method, url, payload: payload as never, headers: { cookie: theo.cookie, ...key } });
 }
 
 function upload(url: string, files: FilePart[], headers: Record<string, string> = {}) {
@@ -125,6 +128,26 @@ describe('accepted photos', () => {
     expect(items[0]).toMatchObject({ subjectType: 'rise-check', subjectId: check.id, feedingId: feeding.id });
     const list = await created<PhotoListResponse>(call('GET', `/api/feedings/${feeding.id}/photos`), 200);
     expect(list.items.map((p) => p.id)).toEqual([items[0]!.id]);
+  });
+
+  it('keeps when the camera says it was taken, and the culture’s strip is in that order', async () => {
+    const url = `/api/feedings/${feeding.id}/photos`;
+    const plain = await created<PhotoUploadResponse>(upload(url, [{ name: 'now.png', data: await image('png') }]));
+    // Taken two days ago at 07:15 in New York (UTC−5 in late November), sent after the other.
+    const older = await created<PhotoUploadResponse>(
+      upload(url, [{ name: 'jar.jpg', data: await jpegTakenAt('2026:11:28 07:15:00', '-05:00') }]),
+    );
+    expect(plain.items[0]?.takenAt).toBeNull();
+    expect(older.items[0]?.takenAt).toBe('2026-11-28T12:15:00.000Z');
+    const strip = await created<PhotoListResponse>(call('GET', `/api/cultures/${feeding.cultureId}/photos`), 200);
+    expect(strip.items.map((p) => p.id)).toEqual([older.items[0]?.id, plain.items[0]?.id]);
+    // Read back: the stored image has no EXIF left, the time lives in the row only.
+    const stored = await t.app.inject({
+      method: 'GET',
+      url: older.items[0]?.displayUrl ?? '',
+      headers: { cookie: theo.cookie },
+    });
+    expect((await sharp(stored.rawPayload).metadata()).exif).toBeUndefined();
   });
 
   it('GPS and other EXIF data are gone from what is stored', async () => {

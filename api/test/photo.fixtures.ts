@@ -52,6 +52,17 @@ export function jpegWithGps(): Promise<Buffer> {
     .toBuffer();
 }
 
+/** A JPEG whose EXIF says when it was taken (EXIF 2.31 DateTimeOriginal, with OffsetTimeOriginal if given). */
+export function jpegTakenAt(dateTimeOriginal: string, offset?: string): Promise<Buffer> {
+  return sharp({ create: { width: 320, height: 240, channels: 3, background: crumb } })
+    .jpeg()
+    .withExif({
+      IFD0: { Make: 'Peakwise test camera' },
+      IFD2: { DateTimeOriginal: dateTimeOriginal, ...(offset ? { OffsetTimeOriginal: offset } : {}) },
+    })
+    .toBuffer();
+}
+
 /** A landscape JPEG (400 × 200 px as stored) whose EXIF says to turn it 90° clockwise (orientation 6). */
 export function jpegTurnedSideways(): Promise<Buffer> {
   return sharp({ create: { width: 400, height: 200, channels: 3, background: crumb } })

@@ -134,6 +134,7 @@ export class PhotoController {
   }
 
   @Patch('photos/:photoId')
+  @Idempotent()
   @ApiOkResponse({ type: PhotoView })
   @ApiNotFoundResponse({ description: 'No photo of yours with this id' })
   update(

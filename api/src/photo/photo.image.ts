@@ -10,6 +10,8 @@ export interface ProcessedPhoto {
   /** Of the display image, px. */
   width: number;
   height: number;
+  /** The camera's EXIF record, read before it is stripped (see photo.taken-at.ts). */
+  exif: Buffer | undefined;
 }
 
 const ACCEPTED: readonly string[] = PHOTO_ACCEPTED_TYPES;
@@ -55,7 +57,13 @@ export async function processPhoto(name: string, bytes: Buffer): Promise<Process
       .resize(PHOTO_THUMBNAIL_EDGE, PHOTO_THUMBNAIL_EDGE, { fit: 'inside', withoutEnlargement: true })
       .webp({ quality: WEBP_QUALITY })
       .toBuffer();
-    return { display: display.data, thumbnail, width: display.info.width, height: display.info.height };
+    return {
+      display: display.data,
+      thumbnail,
+      width: display.info.width,
+      height: display.info.height,
+      exif: meta.exif,
+    };
   } catch {
     throw new PhotoRefused(422, `“${name}” looks like ${type.mime} but could not be read.`);
   }

@@ -16,6 +16,7 @@ export function toPhoto(row: PhotoRow): Photo {
     height: row.height,
     displayUrl: `/api/photos/${row.id}/display`,
     thumbnailUrl: `/api/photos/${row.id}/thumbnail`,
+    takenAt: row.takenAt?.toISOString() ?? null,
     createdAt: row.createdAt.toISOString(),
   };
 }

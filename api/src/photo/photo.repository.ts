@@ -1,6 +1,6 @@
 import { Inject, Injectable } from '@nestjs/common';
 import type { PhotoSubjectType } from '@peakwise/shared';
-import type { Insertable, Selectable } from 'kysely';
+import { sql, type Insertable, type Selectable } from 'kysely';
 import { DATABASE } from '../db/database.module.js';
 import type { Database } from '../db/database.js';
 import type { Photo } from '../db/types.js';
@@ -69,7 +69,7 @@ export class PhotoRepository {
     return this.db.selectFrom('photo').selectAll().where('id', '=', id).executeTakeFirst();
   }
 
-  /** Oldest first: a strip reads left to right in time. */
+  /** Oldest first by when it was taken (the upload time when the camera did not say): a strip reads left to right in time. */
   async list(scope: PhotoListScope, page: { limit: number; offset: number }) {
     const base = this.db.selectFrom('photo').where((eb) => {
       if ('feedingId' in scope) return eb('feedingId', '=', scope.feedingId);
@@ -78,7 +78,14 @@ export class PhotoRepository {
       return eb.and([eb('cultureId', '=', scope.cultureId), eb('feedingId', 'is not', null)]);
     });
     const [items, count] = await Promise.all([
-      base.selectAll().orderBy('createdAt').orderBy('id').limit(page.limit).offset(page.offset).execute(),
+      base
+        .selectAll()
+        .orderBy(sql`coalesce(taken_at, created_at)`)
+        .orderBy('createdAt')
+        .orderBy('id')
+        .limit(page.limit)
+        .offset(page.offset)
+        .execute(),
       base.select((eb) => eb.fn.countAll<string>().as('n')).executeTakeFirstOrThrow(),
     ]);
     return { items, total: Number(count.n) };

@@ -10,6 +10,7 @@ import type { AccountRecord } from '../account/account.repository.js';
 import { ClassAccessRepository } from '../classroom/class-access.repository.js';
 import { fieldError } from '../common/validation.js';
 import { processPhoto, type ProcessedPhoto } from './photo.image.js';
+import { photoTakenAt } from './photo.taken-at.js';
 import { toPhoto } from './photo.mapper.js';
 import { PhotoRepository, type NewPhoto, type PhotoListScope, type PhotoSubject } from './photo.repository.js';
 import { PhotoStorage, type StoredObject } from './photo.storage.js';
@@ -63,7 +64,7 @@ export class PhotoService {
     // file leaves nothing behind of the others.
     const processed: ProcessedPhoto[] = [];
     for (const file of files) processed.push(await processPhoto(file.originalname, file.buffer ?? Buffer.alloc(0)));
-    const rows = await this.store(subject, viewer.id, processed);
+    const rows = await this.store(subject, viewer, processed);
     return { items: rows.map(toPhoto) };
   }
 
@@ -109,7 +110,7 @@ export class PhotoService {
   }
 
   /** Objects first, rows after: a row never names a missing object. On failure nothing stays. */
-  private async store(subject: PhotoSubject, accountId: string, processed: ProcessedPhoto[]) {
+  private async store(subject: PhotoSubject, owner: AccountRecord, processed: ProcessedPhoto[]) {
     const rows: NewPhoto[] = [];
     const written: string[] = [];
     // One statement gives every row the same now(): a millisecond apart keeps the order sent.
@@ -123,7 +124,7 @@ export class PhotoService {
         await this.storage.put(thumbnailKey, photo.thumbnail, 'image/webp');
         written.push(thumbnailKey);
         rows.push({
-          accountId,
+          accountId: owner.id,
           subjectType: subject.type,
           feedingId: subject.feedingId,
           riseCheckId: subject.type === 'rise-check' ? subject.id : null,
@@ -134,6 +135,7 @@ export class PhotoService {
           displayKey,
           thumbnailKey,
           createdAt: new Date(now + index),
+          takenAt: photoTakenAt(photo.exif, owner.timeZone, now),
         });
       }
       return await this.photos.insertMany(rows);

@@ -10,7 +10,7 @@ import type { Paged, PageQuery } from './paging.js';
 //        multipart/form-data, files in the field "photos" (1–PHOTOS_MAX_PER_REQUEST, each at most
 //        PHOTO_MAX_BYTES, JPEG/PNG/WebP decided by the bytes) → 201 PhotoUploadResponse
 //   GET  /api/feedings/:feedingId/photos · /api/plans/:planId/photos · /api/cultures/:cultureId/photos
-//        (a culture's strip: its feedings' and rise checks' photos, oldest first) → PhotoListResponse
+//        (a culture's strip: its feedings' and rise checks' photos, oldest first by when taken) → PhotoListResponse
 //   GET  /api/photos/:photoId/display · /api/photos/:photoId/thumbnail → the image (image/webp)
 //   PATCH /api/photos/:photoId {caption} · DELETE /api/photos/:photoId → 204 (owner only)
 
@@ -40,6 +40,8 @@ export interface Photo {
   /** Paths under /api to fetch the images (same-origin, sent with the session cookie). */
   displayUrl: string;
   thumbnailUrl: string;
+  /** When the camera says it was taken (EXIF, read before the metadata is stripped); null if it does not. */
+  takenAt: string | null;
   createdAt: string;
 }
 

@@ -15,6 +15,8 @@ export class PhotoView implements Photo {
   @ApiProperty({ description: 'Of the display image, px' }) height: number;
   @ApiProperty({ example: '/api/photos/…/display' }) displayUrl: string;
   @ApiProperty({ example: '/api/photos/…/thumbnail' }) thumbnailUrl: string;
+  @ApiProperty({ type: String, format: 'date-time', nullable: true, description: 'From the camera (EXIF), if it says' })
+  takenAt: string | null;
   @ApiProperty({ format: 'date-time' }) createdAt: string;
 }
 

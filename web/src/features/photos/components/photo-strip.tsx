@@ -13,7 +13,14 @@ import { useSignedInAccount } from '@/lib/auth/use-signed-in-account';
 import { getFeedings } from '@/lib/logbook/get-feedings';
 import { logbookKeys } from '@/lib/logbook/query-keys';
 import { usePhotos } from '../api/get-photos';
-import { clockStyle, formatPhotoClock, formatPhotoDay, formatPhotoTime, groupByFeeding } from '../utils/photo-words';
+import {
+  clockStyle,
+  formatPhotoClock,
+  formatPhotoDay,
+  formatPhotoTime,
+  groupByFeeding,
+  shownAt,
+} from '../utils/photo-words';
 import { PhotoThumb } from './photo-thumb';
 import { PhotoViewer } from './photo-viewer';
 
@@ -127,12 +134,12 @@ export function PhotoStrip({ cultureId, feedingHref, source, readOnly = false }:
                         <PhotoThumb
                           photo={photo}
                           size={THUMB}
-                          when={when(photo.createdAt)}
+                          when={when(shownAt(photo))}
                           onOpen={() => setOpen(ordered.indexOf(photo))}
                         />
                         <Typography variant="caption" color="text.secondary" component="p" noWrap>
-                          {formatPhotoDay(photo.createdAt, account.timeZone)} ·{' '}
-                          {formatPhotoClock(photo.createdAt, account.timeZone, style)}
+                          {formatPhotoDay(shownAt(photo), account.timeZone)} ·{' '}
+                          {formatPhotoClock(shownAt(photo), account.timeZone, style)}
                         </Typography>
                       </Box>
                     ))}

@@ -60,7 +60,7 @@ export function PhotoViewer({ photos, index, onIndexChange, when, feedingLink, r
           <DialogTitle id={titleId} sx={{ pr: 7 }}>
             {what}
             <Typography variant="body2" color="text.secondary">
-              Added {when(photo.createdAt)}
+              {photo.takenAt ? `Taken ${when(photo.takenAt)}` : `Added ${when(photo.createdAt)}`}
               {photos.length > 1 && ` · ${index! + 1} of ${photos.length}`}
             </Typography>
             <IconButton onClick={close} aria-label="Close" sx={{ position: 'absolute', right: 8, top: 8 }}>
@@ -73,7 +73,7 @@ export function PhotoViewer({ photos, index, onIndexChange, when, feedingLink, r
                 <Box
                   component="img"
                   src={imageSrc(photo.displayUrl)}
-                  alt={photoAlt(photo, when(photo.createdAt))}
+                  alt={photoAlt(photo, when(photo.takenAt ?? photo.createdAt))}
                   width={photo.width}
                   height={photo.height}
                   sx={{

@@ -8,7 +8,7 @@ import { useId, useState } from 'react';
 import { LoadError } from '@/components/feedback/load-error';
 import { useSignedInAccount } from '@/lib/auth/use-signed-in-account';
 import { usePhotos } from '../api/get-photos';
-import { clockStyle, formatPhotoClock, formatPhotoDay, formatPhotoTime } from '../utils/photo-words';
+import { clockStyle, formatPhotoClock, formatPhotoDay, formatPhotoTime, shownAt } from '../utils/photo-words';
 import { PhotoThumb } from './photo-thumb';
 import { PhotoUploader } from './photo-uploader';
 import { PhotoViewer } from './photo-viewer';
@@ -70,10 +70,10 @@ export function PhotosCard({ subject, readOnly = false }: PhotosCardProps) {
             >
               {items.map((photo, i) => (
                 <Box component="li" key={photo.id} sx={{ minWidth: 0 }}>
-                  <PhotoThumb photo={photo} when={when(photo.createdAt)} onOpen={() => setOpen(i)} />
+                  <PhotoThumb photo={photo} when={when(shownAt(photo))} onOpen={() => setOpen(i)} />
                   <Typography variant="caption" color="text.secondary" component="p" noWrap sx={{ mt: 0.5 }}>
                     {photo.caption ??
-                      `${formatPhotoDay(photo.createdAt, account.timeZone)} · ${formatPhotoClock(photo.createdAt, account.timeZone, style)}`}
+                      `${formatPhotoDay(shownAt(photo), account.timeZone)} · ${formatPhotoClock(shownAt(photo), account.timeZone, style)}`}
                   </Typography>
                 </Box>
               ))}

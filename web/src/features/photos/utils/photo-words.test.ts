@@ -13,6 +13,7 @@ const photo = (id: string, feedingId: string | null, createdAt: string): Photo =
   height: 1600,
   displayUrl: `/api/photos/${id}/display`,
   thumbnailUrl: `/api/photos/${id}/thumbnail`,
+  takenAt: null,
   createdAt,
 });
 

@@ -28,6 +28,9 @@ export function formatPhotoDay(iso: string, timeZone: string): string {
   return new Date(iso).toLocaleDateString('en-GB', { timeZone, day: 'numeric', month: 'short' });
 }
 
+/** When the photo shows: when the camera took it, else when it was added. */
+export const shownAt = (photo: Pick<Photo, 'takenAt' | 'createdAt'>): string => photo.takenAt ?? photo.createdAt;
+
 /** What a screen reader says for a thumbnail: its caption, else what it shows and when. */
 export function photoAlt(photo: Pick<Photo, 'caption' | 'subjectType' | 'createdAt'>, when: string): string {
   if (photo.caption) return photo.caption;
