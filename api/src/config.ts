@@ -11,8 +11,20 @@ export interface AppConfig {
   logLevel: string;
   /** log2 of scrypt's N. 17 by default (OWASP's minimum for scrypt); tests lower it for speed. */
   passwordHashCost: number;
-  /** Sign-in and sign-up attempts allowed per client address per minute (brute-force brake). */
+  /**
+   * Sign-in, sign-up and password-reset attempts allowed per client address per minute, per route
+   * (brute-force brake; counted in PostgreSQL so every process shares it).
+   */
   authAttemptsPerMinute: number;
+  /** Failed sign-ins per e-mail, from addresses it never signed in from, per window (10 when left out). */
+  signInFailuresPerAccount?: number;
+  /** The window of that count, minutes (15 when left out). */
+  signInFailureWindowMinutes?: number;
+  /**
+   * Other origins allowed to call the API from a browser (CORS_ORIGINS, comma-separated, e.g.
+   * `https://app.example.com`); empty or left out: none, no CORS headers at all.
+   */
+  corsOrigins?: string[];
   /** Delete expired sessions every this many seconds; 0 turns pruning off (tests). */
   sessionPruneSeconds: number;
   /** Outgoing mail (api/src/mail/). */
@@ -88,6 +100,9 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): AppConfig {
     sessionPruneSeconds: Number(env.SESSION_PRUNE_SECONDS ?? 900),
     alertPollingSeconds: Number(env.ALERT_POLLING_SECONDS ?? 2),
     authAttemptsPerMinute: Number(env.AUTH_ATTEMPTS_PER_MINUTE ?? 10),
+    signInFailuresPerAccount: Number(env.SIGN_IN_FAILURES_PER_ACCOUNT ?? 10),
+    signInFailureWindowMinutes: Number(env.SIGN_IN_FAILURE_WINDOW_MINUTES ?? 15),
+    corsOrigins: parseOrigins(env.CORS_ORIGINS),
     mail: {
       smtpUrl: env.SMTP_URL || 'smtp://127.0.0.1:2525',
       from: env.MAIL_FROM || 'Peakwise <no-reply@peakwise.invalid>',
@@ -113,6 +128,25 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): AppConfig {
         }
       : {}),
   };
+}
+
+/** `https://a.example, https://b.example` → exact origins; anything that is not one is refused at start. */
+function parseOrigins(value: string | undefined): string[] {
+  const items = (value ?? '')
+    .split(',')
+    .map((item) => item.trim())
+    .filter(Boolean);
+  for (const item of items) {
+    let origin: string | null;
+    try {
+      origin = new URL(item).origin;
+    } catch {
+      origin = null;
+    }
+    if (origin !== item.replace(/\/+$/, ''))
+      throw new Error(`CORS_ORIGINS: ${item} is not an origin like https://app.example.com`);
+  }
+  return items.map((item) => item.replace(/\/+$/, ''));
 }
 
 /** A wildcard listen address is no address to put in a link. */

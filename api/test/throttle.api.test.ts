@@ -23,6 +23,9 @@ it('stops password guessing from one address after the allowance, in the error s
   const blocked = await signIn('guess 4', '198.51.100.7');
   expectError(blocked, 429);
   expect(blocked.json<{ message: string }>().message).toMatch(/Too many attempts/);
+  // Seconds until the window ends (RFC 9110 §10.2.3); the window is one minute.
+  expect(Number(blocked.headers['retry-after'])).toBeGreaterThan(0);
+  expect(Number(blocked.headers['retry-after'])).toBeLessThanOrEqual(60);
   // The brake is per address: someone else can still sign in.
   expect((await signIn('guess', '198.51.100.8')).statusCode).toBe(401);
 });

@@ -35,6 +35,7 @@ export class AccountController {
     @Body() body: ChangePasswordDto,
     @Req() req: FastifyRequest,
   ): Promise<void> {
-    await this.service.changePassword(account, body, req.session.sessionId);
+    const epoch = await this.service.changePassword(account, body, req.session.sessionId);
+    req.session.set('sessionEpoch', epoch);
   }
 }

@@ -1,4 +1,4 @@
-import type { Account } from '@peakwise/shared';
+import type { Account, AdminAccount } from '@peakwise/shared';
 import type { AccountRecord } from './account.repository.js';
 
 /** The public face of an account: never the password hash. */
@@ -13,4 +13,9 @@ export function toAccount(record: AccountRecord): Account {
     timeZone: record.timeZone,
     createdAt: record.createdAt.toISOString(),
   };
+}
+
+/** What an admin sees of an account: the public face and whether it is disabled. */
+export function toAdminAccount(record: AccountRecord): AdminAccount {
+  return { ...toAccount(record), disabledAt: record.disabledAt ? record.disabledAt.toISOString() : null };
 }

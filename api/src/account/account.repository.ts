@@ -107,10 +107,51 @@ export class AccountRepository {
     });
   }
 
-  /** Ends every session of an account except, optionally, the one making the request. */
-  async endSessions(accountId: string, exceptSid?: string): Promise<void> {
-    let query = this.db.deleteFrom('session').where(sql<string>`sess ->> 'accountId'`, '=', accountId);
-    if (exceptSid) query = query.where('sid', '<>', exceptSid);
-    await query.execute();
+  /**
+   * Disables (now) or enables an account. Disabling also ends all its sessions in the same
+   * transaction, so no request that starts after this returns can still use one.
+   */
+  setDisabled(id: string, disabled: boolean): Promise<AccountRecord | undefined> {
+    return this.db.transaction().execute(async (trx) => {
+      const updated = await trx
+        .updateTable('account')
+        .set((eb) => ({
+          disabledAt: disabled ? sql<Date>`coalesce(disabled_at, now())` : null,
+          // Disabling ends the sessions for good: enabling again does not revive them.
+          sessionEpoch: disabled ? eb('sessionEpoch', '+', 1) : eb.ref('sessionEpoch'),
+          updatedAt: new Date(),
+        }))
+        .where('id', '=', id)
+        .returningAll()
+        .executeTakeFirst();
+      if (updated && disabled) {
+        await trx
+          .deleteFrom('session')
+          .where(sql<string>`sess ->> 'accountId'`, '=', id)
+          .execute();
+      }
+      return updated;
+    });
+  }
+
+  /**
+   * Ends every session of an account except, optionally, the one making the request, and returns
+   * the account's new session epoch: the guard refuses sessions with an older one, so a session
+   * row that a request under way saves back is dead all the same. The kept session must take the
+   * new epoch (the caller sets it on the request's session, which is saved when it answers).
+   */
+  endSessions(accountId: string, exceptSid?: string): Promise<number> {
+    return this.db.transaction().execute(async (trx) => {
+      const row = await trx
+        .updateTable('account')
+        .set((eb) => ({ sessionEpoch: eb('sessionEpoch', '+', 1) }))
+        .where('id', '=', accountId)
+        .returning('sessionEpoch')
+        .executeTakeFirst();
+      let query = trx.deleteFrom('session').where(sql<string>`sess ->> 'accountId'`, '=', accountId);
+      if (exceptSid) query = query.where('sid', '<>', exceptSid);
+      await query.execute();
+      return row?.sessionEpoch ?? 0;
+    });
   }
 }

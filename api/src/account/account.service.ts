@@ -2,6 +2,7 @@ import { ConflictException, Injectable, NotFoundException, Optional } from '@nes
 import type {
   Account,
   AccountListResponse,
+  AdminAccount,
   ChangePasswordRequest,
   Role,
   SignUpRequest,
@@ -11,7 +12,7 @@ import { AlertScheduler } from '../alert/alert.scheduler.js';
 import { PasswordService } from '../auth/password.service.js';
 import { passwordProblem } from '../auth/password-policy.js';
 import { fieldError } from '../common/validation.js';
-import { toAccount } from './account.mapper.js';
+import { toAccount, toAdminAccount } from './account.mapper.js';
 import { AccountRepository, type AccountRecord } from './account.repository.js';
 
 @Injectable()
@@ -58,20 +59,38 @@ export class AccountService {
     return toAccount(updated);
   }
 
-  /** Changes the password and signs out every other device of this account. */
-  async changePassword(account: AccountRecord, request: ChangePasswordRequest, currentSid: string): Promise<void> {
+  /**
+   * Changes the password and signs out every other device of this account; the device that made
+   * the change stays signed in (it just proved the password). Returns the session epoch the
+   * current session must carry from now on.
+   */
+  async changePassword(account: AccountRecord, request: ChangePasswordRequest, currentSid: string): Promise<number> {
     if (!(await this.passwords.verify(request.currentPassword, account.passwordHash))) {
       throw fieldError('currentPassword', 'This is not your current password.');
     }
     const problem = passwordProblem(request.newPassword, [account.email, account.displayName]);
     if (problem) throw fieldError('newPassword', problem);
     await this.accounts.update(account.id, { passwordHash: await this.passwords.hash(request.newPassword) });
-    await this.accounts.endSessions(account.id, currentSid);
+    return this.accounts.endSessions(account.id, currentSid);
   }
 
   async list(limit: number, offset: number): Promise<AccountListResponse> {
     const { items, total } = await this.accounts.list(limit, offset);
-    return { items: items.map(toAccount), total };
+    return { items: items.map(toAdminAccount), total };
+  }
+
+  /** Disables or enables an account; `by` is the admin asking, who cannot disable themselves. */
+  async setDisabled(by: AccountRecord, id: string, disabled: boolean): Promise<AdminAccount> {
+    // An admin who disabled themselves would be signed out mid-click and could not undo it.
+    if (disabled && by.id === id) {
+      throw new ConflictException({
+        message: 'You cannot disable your own account.',
+        details: [{ field: 'disabled', message: 'Ask another admin to do this.' }],
+      });
+    }
+    const updated = await this.accounts.setDisabled(id, disabled);
+    if (!updated) throw new NotFoundException('No account with this id.');
+    return toAdminAccount(updated);
   }
 
   async setRole(id: string, role: Role): Promise<Account> {

@@ -12,6 +12,7 @@ import type { ErrorResponse, FieldError } from '@peakwise/shared';
 import type { FastifyReply, FastifyRequest } from 'fastify';
 import { STATUS_CODES } from 'node:http';
 import type { Logger } from 'pino';
+import { TooManyAttemptsException } from './too-many-attempts.exception.js';
 
 interface ErrorBody {
   message?: unknown;
@@ -98,6 +99,9 @@ export class ErrorFilter implements ExceptionFilter {
       return;
     }
     const body = toErrorResponse(exception);
+    if (exception instanceof TooManyAttemptsException) {
+      void reply.header('retry-after', String(exception.retryAfterSeconds));
+    }
     if (body.statusCode >= 500) {
       this.logger.error({ err: exception, reqId: request.id }, 'unhandled error');
     }

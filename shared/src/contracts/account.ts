@@ -54,9 +54,23 @@ export interface Account {
   createdAt: string;
 }
 
+/** An account as the admin list shows it: whether it may sign in, besides the usual fields. */
+export interface AdminAccount extends Account {
+  /** ISO 8601, UTC, when an admin disabled the account; null while it is in use. */
+  disabledAt: string | null;
+}
+
 export interface AccountListResponse {
-  items: Account[];
+  items: AdminAccount[];
   total: number;
+}
+
+/**
+ * PATCH /api/admin/accounts/:id/status (admins). `disabled: true` ends the account's sessions at
+ * once and refuses its sign-ins; `false` lets it sign in again. An admin cannot disable themselves.
+ */
+export interface UpdateAccountStatusRequest {
+  disabled: boolean;
 }
 
 export interface UpdateRoleRequest {

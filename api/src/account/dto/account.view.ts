@@ -5,6 +5,7 @@ import {
   UNIT_SYSTEMS,
   type Account,
   type AccountListResponse,
+  type AdminAccount,
   type Role,
   type TemperatureUnit,
   type UnitSystem,
@@ -22,7 +23,11 @@ export class AccountView implements Account {
   @ApiProperty({ format: 'date-time' }) createdAt: string;
 }
 
+export class AdminAccountView extends AccountView implements AdminAccount {
+  @ApiProperty({ format: 'date-time', nullable: true, type: String }) disabledAt: string | null;
+}
+
 export class AccountListView implements AccountListResponse {
-  @ApiProperty({ type: [AccountView] }) items: AccountView[];
+  @ApiProperty({ type: [AdminAccountView] }) items: AdminAccountView[];
   @ApiProperty() total: number;
 }
