@@ -22,7 +22,7 @@ import {
   type RoleName,
 } from './access-matrix.model.js';
 import type { BodyContext, MatrixRoute } from './access-matrix.table.js';
-import { uniqueEmail } from './helpers.js';
+import { freshKey, uniqueEmail } from './helpers.js';
 
 // Runs one route of the matrix: every role, on every target, in an order where refused requests
 // come first (and must leave the database as it was), then the ones that may succeed.
@@ -143,7 +143,7 @@ async function runCell(world: World, key: string, route: MatrixRoute, cell: Cell
     method,
     url,
     payload: (form?.payload ?? payload) as never,
-    headers: { ...(cookie ? { cookie } : {}), ...form?.headers },
+    headers: { ...(cookie ? { cookie } : {}), ...(method === 'GET' ? {} : freshKey()), ...form?.headers },
   });
 
   const on = cell.target

@@ -1,7 +1,7 @@
 import type { BakePlanView, Culture, Feeding } from '@peakwise/shared';
 import type { Database } from '../src/db/database.js';
 import { caller, createFormula, planBody } from './bake-plan.fixtures.js';
-import { created, signUp, type InjectResponse, type SignedUp } from './helpers.js';
+import { created, freshKey, signUp, type InjectResponse, type SignedUp } from './helpers.js';
 import type { TestApp } from './test-app.js';
 
 // Shared by the comment API tests: the Larkspur class "Weekend Levain" (instructor Ines Marlow;
@@ -76,5 +76,11 @@ export type Call = (
 
 export function callAs(t: TestApp): Call {
   return (method, url, as, payload, headers = {}) =>
-    t.app.inject({ method, url, payload: payload as never, headers: { cookie: as.cookie, ...headers } });
+    t.app.inject({
+      method,
+      url,
+      payload: payload as never,
+      // Writes carry a fresh key like the web client's; a test's own key wins.
+      headers: { cookie: as.cookie, ...(method === 'GET' ? {} : freshKey()), ...headers },
+    });
 }

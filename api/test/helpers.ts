@@ -1,3 +1,4 @@
+import { randomUUID } from 'node:crypto';
 import type { NestFastifyApplication } from '@nestjs/platform-fastify';
 import { gompertz, type Account, type ErrorResponse, type SignUpRequest } from '@peakwise/shared';
 import type { Response } from 'light-my-request';
@@ -159,7 +160,14 @@ export function expectNoInternals(res: InjectResponse): void {
 
 export type HttpMethod = 'GET' | 'POST' | 'PATCH' | 'DELETE';
 
-/** One request through the real app, signed in with `cookie` (or anonymous when null). */
+/** A fresh Idempotency-Key header, as the web client sends with each write. */
+export const freshKey = (): { 'idempotency-key': string } => ({ 'idempotency-key': randomUUID() });
+
+/**
+ * One request through the real app, signed in with `cookie` (or anonymous when null). Writes
+ * carry a fresh Idempotency-Key like the web client's (several logbook writes require one);
+ * tests of the key itself send their own headers.
+ */
 export function send(
   app: NestFastifyApplication,
   method: HttpMethod,
@@ -167,7 +175,8 @@ export function send(
   cookie: string | null,
   payload?: unknown,
 ): Promise<InjectResponse> {
-  return app.inject({ method, url, payload: payload as never, headers: cookie ? { cookie } : {} });
+  const headers = { ...(cookie ? { cookie } : {}), ...(method === 'GET' ? {} : freshKey()) };
+  return app.inject({ method, url, payload: payload as never, headers });
 }
 
 /** Fails the test unless `res` answers `status` (201 by default); returns its JSON body. */

@@ -92,6 +92,7 @@ export class BakePlanController {
   }
 
   @Patch(':id')
+  @Idempotent()
   @ApiOkResponse({ type: BakePlanViewDoc })
   @ApiNotFoundResponse({ description: NOT_YOURS })
   @ApiConflictResponse({ description: 'Cancelling a finished plan' })
@@ -112,7 +113,7 @@ export class BakePlanController {
   }
 
   @Post(':id/steps/:stepId/done')
-  @Idempotent()
+  @Idempotent({ required: true })
   @ApiCreatedResponse({ type: CheckedStepView, description: 'Checking the same step again replaces its times' })
   @ApiBadRequestResponse({
     description: 'Field-named: stepId when the plan has no such step; endedAt before startedAt',
@@ -129,6 +130,7 @@ export class BakePlanController {
   }
 
   @Delete(':id/steps/:stepId/done')
+  @Idempotent()
   @HttpCode(204)
   @ApiNoContentResponse({ description: 'The check-off is undone' })
   @ApiNotFoundResponse({ description: 'No plan of yours with this id, or the step is not checked off' })
@@ -141,7 +143,7 @@ export class BakePlanController {
   }
 
   @Post(':id/readings')
-  @Idempotent()
+  @Idempotent({ required: true })
   @ApiCreatedResponse({ type: DoughReadingView })
   @ApiNotFoundResponse({ description: NOT_YOURS })
   @ApiConflictResponse({ description: 'The plan is finished or cancelled' })

@@ -41,7 +41,7 @@ export class CommentController {
   }
 
   @Post('feedings/:feedingId/comments')
-  @Idempotent()
+  @Idempotent({ required: true })
   @ApiCreatedResponse({ type: CommentViewDoc })
   @ApiBadRequestResponse({ description: 'Field-named: body' })
   @ApiNotFoundResponse({ description: NO_FEEDING })
@@ -65,7 +65,7 @@ export class CommentController {
   }
 
   @Post('plans/:planId/comments')
-  @Idempotent()
+  @Idempotent({ required: true })
   @ApiCreatedResponse({ type: CommentViewDoc })
   @ApiBadRequestResponse({ description: 'Field-named: body' })
   @ApiNotFoundResponse({ description: NO_PLAN })

@@ -37,6 +37,7 @@ export class CultureController {
   }
 
   @Patch(':id')
+  @Idempotent()
   @ApiOkResponse({ type: CultureView })
   @ApiNotFoundResponse({ description: 'No culture of yours with this id' })
   update(

@@ -17,7 +17,7 @@ export class FeedingController {
   constructor(private readonly service: FeedingService) {}
 
   @Post('cultures/:cultureId/feedings')
-  @Idempotent()
+  @Idempotent({ required: true })
   @ApiCreatedResponse({ type: FeedingView })
   @ApiNotFoundResponse({ description: 'No culture of yours with this id' })
   create(
@@ -47,6 +47,7 @@ export class FeedingController {
   }
 
   @Patch('feedings/:id')
+  @Idempotent()
   @ApiOkResponse({ type: FeedingView })
   @ApiNotFoundResponse({ description: 'No feeding of yours with this id' })
   update(

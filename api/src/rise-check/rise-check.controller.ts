@@ -17,7 +17,7 @@ export class RiseCheckController {
   constructor(private readonly service: RiseCheckService) {}
 
   @Post('feedings/:feedingId/rise-checks')
-  @Idempotent()
+  @Idempotent({ required: true })
   @ApiCreatedResponse({ type: RiseCheckView })
   @ApiNotFoundResponse({ description: 'No feeding of yours with this id' })
   create(
@@ -40,6 +40,7 @@ export class RiseCheckController {
   }
 
   @Patch('rise-checks/:id')
+  @Idempotent()
   @ApiOkResponse({ type: RiseCheckView })
   @ApiNotFoundResponse({ description: 'No rise check of yours with this id' })
   update(

@@ -17,7 +17,7 @@ export class TemperatureController {
   constructor(private readonly service: TemperatureService) {}
 
   @Post('feedings/:feedingId/temperatures')
-  @Idempotent()
+  @Idempotent({ required: true })
   @ApiCreatedResponse({
     type: TemperatureReadingBatchView,
     description: 'Always a batch: { readings: [...] } in, { items: [...] } out; all stored or none',

@@ -1,5 +1,5 @@
 import { Inject, Injectable } from '@nestjs/common';
-import { IDEMPOTENCY_KEY_TTL_HOURS } from '@peakwise/shared';
+import { IDEMPOTENCY_KEY_TTL_DAYS } from '@peakwise/shared';
 import { sql, type Selectable } from 'kysely';
 import { DATABASE } from '../../db/database.module.js';
 import type { Database } from '../../db/database.js';
@@ -19,19 +19,35 @@ export interface RequestFingerprint {
  * a retry may run again. Far longer than any write here takes.
  */
 const ABANDONED_AFTER = '2 minutes';
-const EXPIRES_AFTER = `${IDEMPOTENCY_KEY_TTL_HOURS} hours`;
+const EXPIRES_AFTER = `${IDEMPOTENCY_KEY_TTL_DAYS} days`;
+const expired = sql<boolean>`created_at < now() - ${EXPIRES_AFTER}::interval`;
 
 /** The only place SQL about idempotency keys is written. Times are the database's clock. */
 @Injectable()
 export class IdempotencyRepository {
   constructor(@Inject(DATABASE) private readonly db: Database) {}
 
-  async deleteExpired(accountId: string): Promise<void> {
+  /** Drops this one key if it has expired, so a claim never meets a row the sweep has not reached. */
+  async deleteIfExpired(accountId: string, key: string): Promise<void> {
     await this.db
       .deleteFrom('idempotencyKey')
       .where('accountId', '=', accountId)
-      .where('createdAt', '<', sql<Date>`now() - ${EXPIRES_AFTER}::interval`)
+      .where('key', '=', key)
+      .where(expired)
       .execute();
+  }
+
+  /**
+   * Deletes up to `limit` expired keys of any account (the sweep); answers how many. Batched so
+   * a large backlog never holds one long transaction; created_at is indexed (sql/0013).
+   */
+  async deleteExpiredBatch(limit: number): Promise<number> {
+    const result = await sql`
+      DELETE FROM idempotency_key
+      WHERE (account_id, key) IN (
+        SELECT account_id, key FROM idempotency_key WHERE ${expired} LIMIT ${limit}
+      )`.execute(this.db);
+    return Number(result.numAffectedRows ?? 0n);
   }
 
   /** Claims the key for a request about to run; false when the key already has a row. */

@@ -17,7 +17,7 @@ export class IdempotencyService {
   constructor(private readonly keys: IdempotencyRepository) {}
 
   async claim(accountId: string, key: string, request: RequestFingerprint): Promise<Claim> {
-    await this.keys.deleteExpired(accountId);
+    await this.keys.deleteIfExpired(accountId, key);
     // A second pass covers a claim released between our insert and our read.
     for (let attempt = 0; attempt < 2; attempt += 1) {
       if (await this.keys.insert(accountId, key, request)) return { kind: 'claimed' };
