@@ -1,7 +1,6 @@
 import 'reflect-metadata';
 import { randomUUID } from 'node:crypto';
 import fastifyCookie from '@fastify/cookie';
-import helmet from '@fastify/helmet';
 import fastifySession from '@fastify/session';
 import { NestFactory } from '@nestjs/core';
 import { FastifyAdapter, type NestFastifyApplication } from '@nestjs/platform-fastify';
@@ -11,7 +10,9 @@ import connectPgSimple from 'connect-pg-simple';
 import expressSession from 'express-session';
 import type { Logger } from 'pino';
 import { AppModule } from './app.module.js';
+import { registerCsrfCheck } from './common/csrf.js';
 import { ErrorFilter } from './common/error.filter.js';
+import { registerSecurityHeaders } from './common/security-headers.js';
 import { createValidationPipe } from './common/validation.js';
 import type { AppConfig } from './config.js';
 import { openDatabase, type DatabaseHandle } from './db/database.js';
@@ -86,20 +87,20 @@ export async function configureApp(
     reply.header('x-request-id', request.id);
   });
 
-  await app.register(helmet, {
-    contentSecurityPolicy: {
-      directives: {
-        defaultSrc: ["'self'"],
-        // MUI (emotion) injects style tags at run time.
-        styleSrc: ["'self'", "'unsafe-inline'"],
-        imgSrc: ["'self'", 'data:', 'blob:'],
-        fontSrc: ["'self'", 'data:'],
-        scriptSrc: ["'self'"],
-        connectSrc: ["'self'"],
-        upgradeInsecureRequests: null,
-      },
-    },
-  });
+  await registerSecurityHeaders(app, fastify, config.mail.publicUrl);
+  const corsOrigins = config.corsOrigins ?? [];
+  // Closed unless CORS_ORIGINS lists origins: then only those, with cookies, and no wildcard.
+  if (corsOrigins.length > 0) {
+    app.enableCors({
+      origin: corsOrigins,
+      credentials: true,
+      methods: ['GET', 'POST', 'PATCH', 'PUT', 'DELETE'],
+      allowedHeaders: ['Content-Type', 'Idempotency-Key'],
+      maxAge: 600,
+    });
+  }
+  // After helmet, so its headers are on the refusals too; before the session is loaded.
+  registerCsrfCheck(fastify, { publicOrigin: new URL(config.mail.publicUrl).origin, trustedOrigins: corsOrigins });
   await app.register(fastifyCookie as never);
   const PgStore = connectPgSimple(expressSession);
   const store = new PgStore({
