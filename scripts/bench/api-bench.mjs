@@ -67,14 +67,22 @@ export function warmUp(seconds, connections) {
  * One request at a time for about `seconds` (at least `min` requests): a slow route's own latency,
  * without queueing behind others. Throws on an unexpected status.
  */
-export async function serial({ label, baseUrl, path, headers = {}, seconds, min = 2 }) {
+export async function serial({ label, baseUrl, path, headers = {}, seconds, min = 2, post = null }) {
   const times = [];
   const until = Date.now() + seconds * 1000;
   while (times.length < min || Date.now() < until) {
     const started = performance.now();
-    const response = await fetch(`${baseUrl}${path}`, { headers });
+    const response = await fetch(`${baseUrl}${path}`, {
+      ...(post
+        ? {
+            method: 'POST',
+            body: post,
+            headers: { ...headers, 'content-type': 'application/json', 'idempotency-key': randomUUID() },
+          }
+        : { headers }),
+    });
     await response.arrayBuffer();
-    if (response.status !== 200) throw new Error(`${path} answered ${response.status}`);
+    if (response.status !== (post ? 201 : 200)) throw new Error(`${path} answered ${response.status}`);
     times.push(performance.now() - started);
   }
   times.sort((a, b) => a - b);

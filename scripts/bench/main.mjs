@@ -140,6 +140,7 @@ try {
       mode: 0o600,
     });
     log(`holding (--hold): the API stays up on ${api.baseUrl}; sign-ins and paths in ${file}; Ctrl-C ends`);
+    log('where the slow routes spend their time: node scripts/bench/explain.mjs (same BENCH_API_DIST)');
     await new Promise(() => {});
   }
 
@@ -181,6 +182,17 @@ try {
       if (!last) await settle(`${options.label} @ ${options.connections}`);
       return r;
     };
+    log(`api: a) feeding POST, one request at a time…`);
+    runs.push(
+      await serial({
+        label: 'a) feeding POST (Nest API)',
+        baseUrl: api.baseUrl,
+        path: feedingPath,
+        headers: { cookie: poster },
+        post: FEEDING_BODY,
+        seconds: Math.min(seconds, 5),
+      }),
+    );
     const post = await run({
       label: 'a) feeding POST (Nest API)',
       connections: 100,
