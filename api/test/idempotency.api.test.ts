@@ -1,7 +1,9 @@
 import { randomUUID } from 'node:crypto';
 import type { Culture, Feeding } from '@peakwise/shared';
 import { sql } from 'kysely';
-import { afterAll, beforeAll, beforeEach, describe, expect, it } from 'vitest';
+import { afterAll, afterEach, beforeAll, beforeEach, describe, expect, it, vi } from 'vitest';
+import { AlertScheduler } from '../src/alert/alert.scheduler.js';
+import { IdempotencyRepository } from '../src/common/idempotency/idempotency.repository.js';
 import { IdempotencySweeper } from '../src/common/idempotency/idempotency.sweeper.js';
 import { expectError, expectFieldErrors, signUp, type InjectResponse, type SignedUp } from './helpers.js';
 import { createTestApp, resetDatabase, type TestApp } from './test-app.js';
@@ -17,6 +19,7 @@ beforeAll(async () => {
   t = await createTestApp();
 });
 afterAll(() => t.close());
+afterEach(() => vi.restoreAllMocks());
 
 let theo: SignedUp;
 let culture: Culture;
@@ -160,6 +163,35 @@ describe('while the first request with a key is still running', () => {
     const retry = await post(feedingsUrl(), FEEDING, key);
     expect(retry.statusCode).toBe(201);
     expect(retry.json<Feeding>().id).not.toBe(first.json<Feeding>().id);
+  });
+});
+
+describe('when something fails', () => {
+  it('a 4xx gives the key back; a 5xx after the write keeps the claim, so a retry is a 409, not a second feeding', async () => {
+    const key = randomUUID();
+    expectFieldErrors(await post(feedingsUrl(), { ...FEEDING, totalG: -1 }, key), ['totalG']);
+    expect(await keyRows()).toEqual([]);
+
+    // The feeding is inserted, then the step after it fails: the client sees a 500.
+    vi.spyOn(t.app.get(AlertScheduler, { strict: false }), 'refreshCulture').mockRejectedValueOnce(new Error('boom'));
+    expectError(await post(feedingsUrl(), FEEDING, key), 500);
+    expect(await feedingCount()).toBe(1);
+    expect(await keyRows()).toMatchObject([{ key, completedAt: null }]);
+    expectError(await post(feedingsUrl(), FEEDING, key), 409);
+    expect(await feedingCount()).toBe(1);
+  });
+
+  it('storing the answer is tried again when the database blinks, and the retry is still a replay', async () => {
+    const repository = t.app.get(IdempotencyRepository, { strict: false });
+    const spy = vi.spyOn(repository, 'complete').mockRejectedValueOnce(new Error('connection terminated'));
+    const key = randomUUID();
+    const first = await post(feedingsUrl(), FEEDING, key);
+    expect(first.statusCode, first.body).toBe(201);
+    expect(spy).toHaveBeenCalledTimes(2);
+    const retry = await post(feedingsUrl(), FEEDING, key);
+    expect(retry.headers['idempotent-replayed']).toBe('true');
+    expect(retry.body).toBe(first.body);
+    expect(await feedingCount()).toBe(1);
   });
 });
 

@@ -2,6 +2,7 @@ import { createHash } from 'node:crypto';
 import {
   BadRequestException,
   ConflictException,
+  HttpException,
   Injectable,
   SetMetadata,
   UnprocessableEntityException,
@@ -47,13 +48,16 @@ type KeyedRequest = FastifyRequest & { account?: AccountRecord; files?: unknown 
  *
  * Keys are per account (runs after the session guard) and kept IDEMPOTENCY_KEY_TTL_DAYS.
  *
- * Where we differ from the draft: a request that fails gives its key back instead of storing the
- * error, so a corrected retry may use the same key. Failures here write nothing (4xx are refused
+ * Where we differ from the draft: a request refused with a 4xx gives its key back instead of
+ * storing the error, so a corrected retry may use the same key. A 4xx writes nothing (refused
  * before or inside the write's transaction), so running again is what a replay of the error would
- * have told the client to do.
+ * have told the client to do. A 5xx keeps the claim (see below).
  *
- * Limit: the write and the stored response are separate transactions. If the process dies between
- * the two, the claim is abandoned and a retry more than two minutes later runs again.
+ * Limit: the write and the stored response are separate transactions. If the process (or the
+ * database) dies between the two, or the write committed and something after it failed (a 5xx),
+ * the claim is left without a response: retries get 409 for two minutes, then the claim counts as
+ * abandoned and a retry runs again — a second write if the first had committed. Closing this
+ * needs the claim, the write and the response in one transaction (see the report of this change).
  */
 @Injectable()
 export class IdempotencyInterceptor implements NestInterceptor {
@@ -106,16 +110,26 @@ export class IdempotencyInterceptor implements NestInterceptor {
         });
       case 'claimed':
         return next.handle().pipe(
+          catchError((error: unknown) => {
+            // A 4xx is refused before (or inside) the write's transaction: nothing was written, so
+            // the key is free for a corrected retry. After a 5xx we cannot know whether the write
+            // committed (it may have failed after), so the claim stays: retries get 409 until it
+            // counts as abandoned, rather than writing a second time at once.
+            if (!isClientError(error)) return throwError(() => error);
+            return from(this.idempotency.release(account.id, key)).pipe(concatMap(() => throwError(() => error)));
+          }),
+          // The write succeeded: whatever happens while storing its answer, the key is not released.
           concatMap(async (body: unknown) => {
             await this.idempotency.complete(account.id, key, reply.statusCode, body);
             return body;
           }),
-          catchError((error: unknown) =>
-            from(this.idempotency.release(account.id, key)).pipe(concatMap(() => throwError(() => error))),
-          ),
         );
     }
   }
+}
+
+function isClientError(error: unknown): boolean {
+  return error instanceof HttpException && error.getStatus() < 500;
 }
 
 function refusal(message: string, detail: string): BadRequestException {

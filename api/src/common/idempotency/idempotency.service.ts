@@ -1,6 +1,9 @@
 import { Injectable } from '@nestjs/common';
 import { IdempotencyRepository, type RequestFingerprint } from './idempotency.repository.js';
 
+/** Pauses between attempts at storing an answer (about 3.5 s in all). */
+const COMPLETE_RETRY_MS = [250, 1000, 2250];
+
 export type Claim =
   | { kind: 'claimed' }
   | { kind: 'replay'; statusCode: number; body: unknown }
@@ -10,7 +13,7 @@ export type Claim =
 /**
  * The Idempotency-Key protocol. The first request with a key claims it (a row without a
  * response), runs, and stores its response; a retry with the same key and the same request gets
- * that response back. A failed request gives its key back. See idempotency.interceptor.ts.
+ * that response back. A refused request (4xx) gives its key back. See idempotency.interceptor.ts.
  */
 @Injectable()
 export class IdempotencyService {
@@ -35,9 +38,23 @@ export class IdempotencyService {
     return { kind: 'in-progress' };
   }
 
-  complete(accountId: string, key: string, statusCode: number, body: unknown): Promise<void> {
+  /**
+   * Stores the answer of a write that succeeded, trying again for a few seconds: a database that
+   * blinks now would otherwise leave a written request without a stored answer, and a retry two
+   * minutes later would write it again.
+   */
+  async complete(accountId: string, key: string, statusCode: number, body: unknown): Promise<void> {
     // Stored as the text the client received; see the json column's comment in sql/.
-    return this.keys.complete(accountId, key, statusCode, JSON.stringify(body ?? null));
+    const json = JSON.stringify(body ?? null);
+    for (let attempt = 0; ; attempt += 1) {
+      try {
+        await this.keys.complete(accountId, key, statusCode, json);
+        return;
+      } catch (error) {
+        if (attempt >= COMPLETE_RETRY_MS.length) throw error;
+        await new Promise((resolve) => setTimeout(resolve, COMPLETE_RETRY_MS[attempt]));
+      }
+    }
   }
 
   release(accountId: string, key: string): Promise<void> {
