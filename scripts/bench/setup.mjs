@@ -97,9 +97,15 @@ async function waitForHealth(child, url, name) {
   throw new Error(`the ${name} did not answer ${url} within 90 s`);
 }
 
+const opened = new Set();
+/** .data/bench/<name>.log, emptied at the first start of a run; a restarted API appends. */
 function logTo(name) {
   mkdirSync(benchDir, { recursive: true });
-  return createWriteStream(join(benchDir, `${name}.log`));
+  const flags = opened.has(name) ? 'a' : 'w';
+  opened.add(name);
+  const stream = createWriteStream(join(benchDir, `${name}.log`), { flags });
+  stream.write(`--- started ${new Date().toISOString()}\n`);
+  return stream;
 }
 
 function pipeOut(child, stream) {
