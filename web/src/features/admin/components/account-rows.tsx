@@ -1,4 +1,4 @@
-import type { Account, Role } from '@peakwise/shared';
+import type { Account, AdminAccount, Role } from '@peakwise/shared';
 import Box from '@mui/material/Box';
 import List from '@mui/material/List';
 import ListItem from '@mui/material/ListItem';
@@ -10,17 +10,19 @@ import TableRow from '@mui/material/TableRow';
 import Typography from '@mui/material/Typography';
 import { formatDate } from '../utils/format-date';
 import { RoleSelect } from './role-select';
+import { StatusControl } from './status-control';
 
 export interface AccountRowsProps {
-  accounts: Account[];
+  accounts: AdminAccount[];
   /** The signed-in admin: their own row can't be changed here. */
   self: Account;
   pendingId: string | undefined;
   onRoleChange: (account: Account, role: Role) => void;
+  onStatusChange: (account: AdminAccount, disabled: boolean) => void;
 }
 
 /** Wide screens: a table, one account per row. */
-export function AccountTable({ accounts, self, pendingId, onRoleChange }: AccountRowsProps) {
+export function AccountTable({ accounts, self, pendingId, onRoleChange, onStatusChange }: AccountRowsProps) {
   return (
     <Table aria-label="Accounts">
       <TableHead>
@@ -29,6 +31,7 @@ export function AccountTable({ accounts, self, pendingId, onRoleChange }: Accoun
           <TableCell>E-mail</TableCell>
           <TableCell>Joined</TableCell>
           <TableCell sx={{ width: 180 }}>Role</TableCell>
+          <TableCell sx={{ width: 200 }}>Sign-in</TableCell>
         </TableRow>
       </TableHead>
       <TableBody>
@@ -46,6 +49,14 @@ export function AccountTable({ accounts, self, pendingId, onRoleChange }: Accoun
                 onChange={(role) => onRoleChange(account, role)}
               />
             </TableCell>
+            <TableCell>
+              <StatusControl
+                account={account}
+                isSelf={account.id === self.id}
+                pending={pendingId === account.id}
+                onChange={(disabled) => onStatusChange(account, disabled)}
+              />
+            </TableCell>
           </TableRow>
         ))}
       </TableBody>
@@ -54,7 +65,7 @@ export function AccountTable({ accounts, self, pendingId, onRoleChange }: Accoun
 }
 
 /** Phones: a stacked list, name and e-mail above the role picker, nothing to scroll sideways. */
-export function AccountList({ accounts, self, pendingId, onRoleChange }: AccountRowsProps) {
+export function AccountList({ accounts, self, pendingId, onRoleChange, onStatusChange }: AccountRowsProps) {
   return (
     <List aria-label="Accounts" disablePadding>
       {accounts.map((account) => (
@@ -77,6 +88,12 @@ export function AccountList({ accounts, self, pendingId, onRoleChange }: Account
             isSelf={account.id === self.id}
             pending={pendingId === account.id}
             onChange={(role) => onRoleChange(account, role)}
+          />
+          <StatusControl
+            account={account}
+            isSelf={account.id === self.id}
+            pending={pendingId === account.id}
+            onChange={(disabled) => onStatusChange(account, disabled)}
           />
         </ListItem>
       ))}

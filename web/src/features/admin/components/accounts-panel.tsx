@@ -1,4 +1,4 @@
-import type { Account, Role } from '@peakwise/shared';
+import type { Account, AdminAccount, Role } from '@peakwise/shared';
 import Alert from '@mui/material/Alert';
 import Card from '@mui/material/Card';
 import LinearProgress from '@mui/material/LinearProgress';
@@ -15,7 +15,9 @@ import { isApiError } from '@/lib/api-client';
 import { useSignedInAccount } from '@/lib/auth/use-signed-in-account';
 import { useAccounts } from '../api/get-accounts';
 import { useUpdateRole } from '../api/update-role';
+import { useUpdateStatus } from '../api/update-status';
 import { roleChangedMessage } from '../utils/roles';
+import { statusChangedMessage } from '../utils/status';
 import { AccountList, AccountTable } from './account-rows';
 
 const PAGE_SIZE = 20;
@@ -36,6 +38,7 @@ export function AccountsPanel() {
   const page = pageFrom(params);
   const accounts = useAccounts({ limit: PAGE_SIZE, offset: page * PAGE_SIZE });
   const updateRole = useUpdateRole();
+  const updateStatus = useUpdateStatus();
   const [notice, setNotice] = useState<Notice>(null);
 
   if (accounts.isPending) return <PageLoader label="Loading accounts" />;
@@ -58,7 +61,28 @@ export function AccountsPanel() {
       },
     );
   };
-  const pendingId = updateRole.isPending ? updateRole.variables.accountId : undefined;
+  const onStatusChange = (account: AdminAccount, disabled: boolean) => {
+    updateStatus.mutate(
+      { account, disabled },
+      {
+        onSuccess: (updated) =>
+          setNotice({
+            severity: 'success',
+            text: statusChangedMessage(updated.displayName, updated.disabledAt !== null),
+          }),
+        onError: (error) =>
+          setNotice({
+            severity: 'error',
+            text: isApiError(error) ? error.message : 'The account could not be changed.',
+          }),
+      },
+    );
+  };
+  const pendingId = updateRole.isPending
+    ? updateRole.variables.accountId
+    : updateStatus.isPending
+      ? updateStatus.variables.account.id
+      : undefined;
   const Rows = wide ? AccountTable : AccountList;
 
   return (
@@ -69,7 +93,13 @@ export function AccountsPanel() {
         {items.length === 0 ? (
           <Typography sx={{ p: 2 }}>No accounts on this page.</Typography>
         ) : (
-          <Rows accounts={items} self={self} pendingId={pendingId} onRoleChange={onRoleChange} />
+          <Rows
+            accounts={items}
+            self={self}
+            pendingId={pendingId}
+            onRoleChange={onRoleChange}
+            onStatusChange={onStatusChange}
+          />
         )}
         {total > PAGE_SIZE && (
           <TablePagination
