@@ -9,5 +9,7 @@ export default defineConfig({
     testTimeout: 60_000,
     hookTimeout: 60_000,
     fileParallelism: false,
+    // A page waits on the API and the fake services; on a busy machine 1 s (the default) is too tight.
+    expect: { poll: { timeout: 10_000 } },
   },
 });

@@ -1,6 +1,7 @@
 import { Module, type DynamicModule } from '@nestjs/common';
 import { APP_GUARD } from '@nestjs/core';
 import { AccountModule } from './account/account.module.js';
+import { AccountDeletionModule } from './account-deletion/account-deletion.module.js';
 import { AdminModule } from './admin/admin.module.js';
 import { AlertModule } from './alert/alert.module.js';
 import { AuthModule } from './auth/auth.module.js';
@@ -38,6 +39,7 @@ export class AppModule {
         DatabaseModule.forRoot(database),
         MailModule,
         AccountModule,
+        AccountDeletionModule,
         AuthModule,
         PasswordResetModule,
         // Development only: config.ts leaves devMailUrl null in production.

@@ -58,6 +58,8 @@ export interface MatrixRoute {
 
 /** Routes the matrix does not try, each with its reason. HEAD twins of GET routes are skipped by rule. */
 export const NOT_IN_MATRIX: Record<string, string> = {
+  'POST /api/account/delete':
+    'deletes the caller’s own account (no id to point at another’s), which would end the matrix’s roles; photo-access.api.test.ts deletes one with its password and checks anonymous → 401',
   'GET /api/dev/mail':
     'development mailbox: loaded only outside production (config.ts); public by design and reads the fake SMTP server, no database rows',
   'GET /api/dev/push':

@@ -32,6 +32,7 @@ it('documents every route under /api', async () => {
     [
       '/api/account',
       '/api/account/password',
+      '/api/account/delete',
       '/api/account/export.json',
       '/api/admin/accounts',
       '/api/admin/accounts/{id}/role',

@@ -4,7 +4,7 @@ import { PhotoStorage } from '../src/photo/photo.storage.js';
 import { PhotoTrash } from '../src/photo/photo.trash.js';
 import { leaveClass } from './classroom.fixtures.js';
 import { callAs, commentWorld, type Call, type CommentWorld } from './comment.fixtures.js';
-import { created, expectError, type SignedUp } from './helpers.js';
+import { created, expectError, PASSWORD, type SignedUp } from './helpers.js';
 import { image, multipart } from './photo.fixtures.js';
 import { startTestBucket, storageConfig, type TestBucket } from './s3-fixture.js';
 import { createTestApp, resetDatabase, type TestApp } from './test-app.js';
@@ -165,15 +165,28 @@ describe('deletion that deletes', () => {
     expect(await bucket.keys()).toEqual([]);
   });
 
-  it('deleting an account (no route yet: the row, as an admin tool would) leaves its keys in the trash for the sweep', async () => {
+  it('deleting an account (its password again) removes every photo it kept, and the session ends', async () => {
     await upload(`/api/feedings/${w.feeding.id}/photos`);
     await upload(`/api/plans/${w.plan.id}/photos`);
-    await t.db.deleteFrom('account').where('id', '=', w.theo.account.id).execute();
-    const trashed = await t.db.selectFrom('photoObjectTrash').select('objectKey').execute();
-    expect(trashed).toHaveLength(4);
-    await t.app.get(PhotoTrash).empty();
+    expect(await bucket.keys()).toHaveLength(4);
+    // Without a session: 401. With the wrong password: 400. Neither changes anything.
+    expectError(
+      await t.app.inject({ method: 'POST', url: '/api/account/delete', payload: { password: PASSWORD } }),
+      401,
+    );
+    const wrong = await call('POST', '/api/account/delete', w.theo, { password: 'not my password at all' });
+    expect(expectError(wrong, 400).details).toEqual([{ field: 'password', message: 'This is not your password.' }]);
+    expect(await bucket.keys()).toHaveLength(4);
+
+    const gone = await call('POST', '/api/account/delete', w.theo, { password: PASSWORD });
+    expect(gone.statusCode, gone.body).toBe(204);
+    expect(String(gone.headers['set-cookie'])).toMatch(/peakwise\.sid=;/);
     expect(await bucket.keys()).toEqual([]);
     expect(await t.db.selectFrom('photoObjectTrash').select('objectKey').execute()).toEqual([]);
+    expect(await t.db.selectFrom('account').select('id').where('id', '=', w.theo.account.id).execute()).toEqual([]);
+    expect(await t.db.selectFrom('culture').select('id').where('id', '=', w.culture.id).execute()).toEqual([]);
+    // The captured cookie opens nothing any more.
+    expectError(await call('GET', '/api/account', w.theo), 401);
   });
 
   it('when the store is unreachable the delete still succeeds, and the sweep removes the images later', async () => {

@@ -94,6 +94,10 @@ async function logFeedingAndChecks(page: Page, base: string): Promise<string> {
   await page.getByLabel('Height from the jar’s base').fill('82');
   await page.screenshot({ path: join(RESULTS_DIR, 'rise-check.png') });
   await page.getByRole('button', { name: 'Save rise check' }).click();
+  // Saved: the jar's photo is offered, and the curve is one tap away.
+  await page.getByTestId('rise-check-saved').getByText('Rise check saved.').waitFor();
+  await page.screenshot({ path: join(RESULTS_DIR, 'rise-check-saved.png') });
+  await page.getByRole('link', { name: 'See the curve' }).click();
   await page.waitForURL(`${base}/cultures/${cultureId}`);
   const checks = await page.request.get(`${base}/api/feedings/${feeding.id}/rise-checks`);
   expect(((await checks.json()) as { total: number }).total).toBe(5);

@@ -27,6 +27,8 @@ const COUNTRY_LOAF = {
 
 interface PhotoJson {
   id: string;
+  subjectType: string;
+  subjectId: string;
   feedingId: string | null;
   caption: string | null;
   thumbnailUrl: string;
@@ -209,6 +211,42 @@ describe('jar photos from a phone', () => {
     expect(left.map((p) => p.caption)).toEqual(['Domed at peak, 3 h']);
     const deleted = stored.find((p) => p.id !== left[0]!.id)!;
     expect((await page.request.get(`${base}${deleted.thumbnailUrl}`)).status()).toBe(404);
+  });
+
+  it('offers the camera right after a rise check is saved, and the photo joins the culture’s strip', async () => {
+    const page = await browser.context.newPage();
+    await signUp(page, base, 'Amara Quist');
+    const cultureId = await createCulture(page, base, 'Larkspur');
+    const fedAt = Date.now() - 3 * HOUR;
+    const feedingId = await createFeeding(page, base, cultureId, {
+      fedAt: new Date(fedAt).toISOString(),
+      ratio: '1:2:2',
+      totalG: 150,
+      temperatureC: 24,
+      initialHeightMm: 40,
+    });
+    await page.goto(`${base}/cultures/${cultureId}/rise-check`);
+    await page.getByLabel('Height from the jar’s base').fill('71');
+    await page.getByRole('button', { name: 'Save rise check' }).click();
+    const saved = page.getByTestId('rise-check-saved');
+    await saved.getByText('A photo of the jar?').waitFor();
+    await saved
+      .getByTestId('photo-camera')
+      .setInputFiles({ name: 'jar.jpg', mimeType: 'image/jpeg', buffer: await jarJpeg(page, 260) });
+    await expect.poll(() => saved.getByTestId('upload-row').getAttribute('data-status')).toBe('done');
+    await settled(page);
+    await page.screenshot({ path: join(RESULTS_DIR, 'photos-rise-check-phone.png') });
+
+    // On the server the photo names the rise check and its feeding; the culture's strip shows it.
+    const checks = (await (await page.request.get(`${base}/api/feedings/${feedingId}/rise-checks`)).json()) as {
+      items: { id: string }[];
+    };
+    const strip = await photosOf(page, `${base}/api/cultures/${cultureId}/photos`);
+    expect(strip).toHaveLength(1);
+    expect(strip[0]).toMatchObject({ subjectType: 'rise-check', subjectId: checks.items[0]?.id, feedingId });
+    await saved.getByRole('link', { name: 'See the curve' }).click();
+    await page.waitForURL(`${base}/cultures/${cultureId}`);
+    await expect.poll(() => page.getByTestId('photo-strip').getByTestId('photo-thumb').count()).toBe(1);
   });
 
   it('adds a crumb photo to a bake from the gallery and shows it in the bake’s photos', async () => {

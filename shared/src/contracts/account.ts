@@ -76,3 +76,8 @@ export interface UpdateAccountStatusRequest {
 export interface UpdateRoleRequest {
   role: Role;
 }
+
+/** POST /api/account/delete → 204: the account and everything it logged are deleted, and the session ends. */
+export interface DeleteAccountRequest {
+  password: string;
+}

@@ -3,6 +3,7 @@ import CardContent from '@mui/material/CardContent';
 import Typography from '@mui/material/Typography';
 import { Page } from '@/components/layout/page';
 import { ChangePasswordForm } from '@/features/account/components/change-password-form';
+import { DeleteAccountCard } from '@/features/account/components/delete-account-card';
 import { ProfileForm } from '@/features/account/components/profile-form';
 import { AccountExportCard } from '@/features/transfer/components/account-export-card';
 import { useSignedInAccount } from '@/lib/auth/use-signed-in-account';
@@ -32,6 +33,7 @@ export function AccountRoute() {
         </CardContent>
       </Card>
       <AccountExportCard />
+      <DeleteAccountCard key={account.id} email={account.email} teaches={account.role !== 'baker'} />
     </Page>
   );
 }

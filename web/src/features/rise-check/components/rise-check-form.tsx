@@ -1,4 +1,4 @@
-import type { Account, Feeding } from '@peakwise/shared';
+import type { Account, Feeding, RiseCheck } from '@peakwise/shared';
 import Button from '@mui/material/Button';
 import InputAdornment from '@mui/material/InputAdornment';
 import Stack from '@mui/material/Stack';
@@ -19,7 +19,8 @@ interface RiseCheckFormProps {
   feeding: Feeding;
   account: Account;
   defaultTakenAt: string;
-  onSaved: () => void;
+  /** With the stored rise check, or undefined when it waits in the outbox (no signal). */
+  onSaved: (saved: RiseCheck | undefined) => void;
 }
 
 /** One number and save: the jar's height now (or its % rise, or × the initial height). */
@@ -45,9 +46,9 @@ export function RiseCheckForm({ feeding, account, defaultTakenAt, onSaved }: Ris
       return;
     }
     try {
-      await create.mutateAsync({ body, headers: idempotency.headers() });
+      const saved = await create.mutateAsync({ body, headers: idempotency.headers() });
       idempotency.settle();
-      onSaved();
+      onSaved(saved);
     } catch (error) {
       idempotency.settle(error);
       const { fieldErrors, formMessage } = mapServerErrors(error, [MODE_FIELD[values.mode], 'temperatureC', 'takenAt']);

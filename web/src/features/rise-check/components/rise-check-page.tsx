@@ -1,3 +1,4 @@
+import type { RiseCheck } from '@peakwise/shared';
 import Alert from '@mui/material/Alert';
 import Button from '@mui/material/Button';
 import Card from '@mui/material/Card';
@@ -13,6 +14,7 @@ import { formatAgo } from '@/lib/format/duration';
 import { useCulture } from '@/lib/logbook/get-culture';
 import { useFeedings } from '@/lib/logbook/get-feedings';
 import { RiseCheckForm } from './rise-check-form';
+import { RiseCheckSaved } from './rise-check-saved';
 
 /** Rise check of the latest feeding; saving goes to the culture page with the refitted curve. */
 export function RiseCheckPage({ cultureId }: { cultureId: string }) {
@@ -21,6 +23,7 @@ export function RiseCheckPage({ cultureId }: { cultureId: string }) {
   const culture = useCulture(cultureId);
   const latest = useFeedings(cultureId, { limit: 1, order: 'desc' });
   const [now] = useState(() => new Date());
+  const [saved, setSaved] = useState<RiseCheck | null>(null);
 
   if (culture.isPending || latest.isPending) return <PageLoader />;
   if (culture.isError) return <LoadError error={culture.error} />;
@@ -33,14 +36,17 @@ export function RiseCheckPage({ cultureId }: { cultureId: string }) {
       documentTitle="Rise check"
       intro={feeding ? `For the feeding ${formatAgo(feeding.fedAt, now)}.` : undefined}
     >
-      {feeding ? (
+      {saved ? (
+        <RiseCheckSaved check={saved} cultureHref={`/cultures/${cultureId}`} />
+      ) : feeding ? (
         <Card>
           <CardContent>
             <RiseCheckForm
               feeding={feeding}
               account={account}
               defaultTakenAt={toLocalInput(now)}
-              onSaved={() => void navigate(`/cultures/${cultureId}`)}
+              // Stored: offer a photo of the jar. Waiting in the outbox (no signal): straight to the culture.
+              onSaved={(check) => (check ? setSaved(check) : void navigate(`/cultures/${cultureId}`))}
             />
           </CardContent>
         </Card>
