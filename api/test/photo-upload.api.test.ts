@@ -132,10 +132,14 @@ describe('accepted photos', () => {
 
   it('keeps when the camera says it was taken, and the culture’s strip is in that order', async () => {
     const url = `/api/feedings/${feeding.id}/photos`;
-    const plain = await created<PhotoUploadResponse>(upload(url, [{ name: 'now.png', data: await image('png') }]));
+    const plain = await created<PhotoUploadResponse>(
+      upload(url, [{ filename: 'now.png', contentType: 'image/png', data: await image('png') }]),
+    );
     // Taken two days ago at 07:15 in New York (UTC−5 in late November), sent after the other.
     const older = await created<PhotoUploadResponse>(
-      upload(url, [{ name: 'jar.jpg', data: await jpegTakenAt('2026:11:28 07:15:00', '-05:00') }]),
+      upload(url, [
+        { filename: 'jar.jpg', contentType: 'image/jpeg', data: await jpegTakenAt('2026:11:28 07:15:00', '-05:00') },
+      ]),
     );
     expect(plain.items[0]?.takenAt).toBeNull();
     expect(older.items[0]?.takenAt).toBe('2026-11-28T12:15:00.000Z');
