@@ -11,7 +11,7 @@ import expressSession from 'express-session';
 import type { Logger } from 'pino';
 import { AppModule } from './app.module.js';
 import { registerCsrfCheck } from './common/csrf.js';
-import { ErrorFilter } from './common/error.filter.js';
+import { ErrorFilter, frameworkError } from './common/error.filter.js';
 import { registerSecurityHeaders } from './common/security-headers.js';
 import { createValidationPipe } from './common/validation.js';
 import type { AppConfig } from './config.js';
@@ -32,6 +32,7 @@ export function createAdapter(logger: Logger): FastifyAdapter {
     requestIdHeader: 'x-request-id',
     genReqId: () => randomUUID(),
     bodyLimit: REQUEST_BODY_MAX_BYTES,
+    frameworkErrors: frameworkError,
   });
 }
 

@@ -2,7 +2,7 @@ import { BadRequestException, Injectable, type ExecutionContext } from '@nestjs/
 import { AuthGuard } from '@nestjs/passport';
 import { plainToInstance } from 'class-transformer';
 import { validate } from 'class-validator';
-import { toFieldErrors } from '../common/validation.js';
+import { screenInput, toFieldErrors } from '../common/validation.js';
 import { SignInDto } from './dto/sign-in.dto.js';
 
 /**
@@ -15,6 +15,9 @@ export class LocalAuthGuard extends AuthGuard('local') {
   override async canActivate(context: ExecutionContext): Promise<boolean> {
     const request = context.switchToHttp().getRequest<{ body: unknown }>();
     const raw = request.body;
+    // The global pipe's screen (too deep, NUL, prototype-named keys) has not run yet: guards come first.
+    const problem = screenInput(raw, null);
+    if (problem) throw new BadRequestException({ message: 'Some fields need another look.', details: [problem] });
     // An array or a bare string would reach class-validator as "an unknown value" with no field.
     const plain = typeof raw === 'object' && raw !== null && !Array.isArray(raw) ? raw : {};
     const body = plainToInstance(SignInDto, plain);

@@ -32,6 +32,8 @@ const PLAIN_MESSAGES: Record<string, string> = {
   FST_ERR_CTP_INVALID_JSON_BODY: 'The request body is not valid JSON.',
   FST_ERR_CTP_EMPTY_JSON_BODY: 'The request body is empty; send a JSON object.',
   FST_ERR_CTP_BODY_TOO_LARGE: 'The request body is too large.',
+  FST_ERR_BAD_URL: 'The address is not a valid URL.',
+  FST_ERR_MAX_PARAM_LENGTH: 'A part of the address is too long.',
 };
 
 function plainMessage(error: unknown): string | undefined {
@@ -73,6 +75,15 @@ export function toErrorResponse(exception: unknown): ErrorResponse {
     error: 'Internal Server Error',
     message: 'Something went wrong on our side. Please try again.',
   };
+}
+
+/**
+ * Fastify's router refuses a malformed or overlong path before Nest sees the request, so its
+ * answers would skip the filter below; this gives them the one error shape too (createAdapter).
+ */
+export function frameworkError(error: unknown, _request: FastifyRequest, reply: FastifyReply): void {
+  const body = toErrorResponse(error);
+  void reply.status(body.statusCode).type('application/json; charset=utf-8').send(body);
 }
 
 /**

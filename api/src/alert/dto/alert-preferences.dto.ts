@@ -9,7 +9,7 @@ import {
   type UpdateAlertPreferencesRequest,
 } from '@peakwise/shared';
 import { Type } from 'class-transformer';
-import { IsBoolean, IsInt, Matches, Max, Min, ValidateNested } from 'class-validator';
+import { IsBoolean, IsInt, IsObject, Matches, Max, Min, ValidateNested } from 'class-validator';
 import { Omittable } from '../../common/dto-helpers.js';
 import { Clearable } from '../../common/log-fields.js';
 
@@ -35,30 +35,35 @@ export class AlertChannelPatchDto implements Partial<AlertChannelChoice> {
 export class AlertChannelsPatchDto implements Partial<Record<AlertKind, Partial<AlertChannelChoice>>> {
   @ApiPropertyOptional({ type: AlertChannelPatchDto })
   @Omittable()
+  @IsObject({ message: 'Send an object.' })
   @ValidateNested()
   @Type(() => AlertChannelPatchDto)
   'culture-ready'?: AlertChannelPatchDto;
 
   @ApiPropertyOptional({ type: AlertChannelPatchDto })
   @Omittable()
+  @IsObject({ message: 'Send an object.' })
   @ValidateNested()
   @Type(() => AlertChannelPatchDto)
   'past-peak'?: AlertChannelPatchDto;
 
   @ApiPropertyOptional({ type: AlertChannelPatchDto })
   @Omittable()
+  @IsObject({ message: 'Send an object.' })
   @ValidateNested()
   @Type(() => AlertChannelPatchDto)
   'feeding-due'?: AlertChannelPatchDto;
 
   @ApiPropertyOptional({ type: AlertChannelPatchDto })
   @Omittable()
+  @IsObject({ message: 'Send an object.' })
   @ValidateNested()
   @Type(() => AlertChannelPatchDto)
   'plan-step'?: AlertChannelPatchDto;
 
   @ApiPropertyOptional({ type: AlertChannelPatchDto })
   @Omittable()
+  @IsObject({ message: 'Send an object.' })
   @ValidateNested()
   @Type(() => AlertChannelPatchDto)
   comment?: AlertChannelPatchDto;
@@ -74,12 +79,14 @@ export class UpdateAlertPreferencesDto implements UpdateAlertPreferencesRequest 
 
   @ApiPropertyOptional({ type: AlertQuietHoursDto, nullable: true, description: 'null = no quiet hours' })
   @Clearable()
+  @IsObject({ message: 'Send an object.' })
   @ValidateNested()
   @Type(() => AlertQuietHoursDto)
   quietHours?: AlertQuietHoursDto | null;
 
   @ApiPropertyOptional({ type: AlertChannelsPatchDto })
   @Omittable()
+  @IsObject({ message: 'Send an object.' })
   @ValidateNested()
   @Type(() => AlertChannelsPatchDto)
   channels?: AlertChannelsPatchDto;

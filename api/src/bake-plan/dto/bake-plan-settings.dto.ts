@@ -1,6 +1,6 @@
 import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
 import { Type } from 'class-transformer';
-import { ValidateNested } from 'class-validator';
+import { IsObject, ValidateNested } from 'class-validator';
 import {
   DOUGH_TEMPERATURE_MAX_C,
   DOUGH_TEMPERATURE_MIN_C,
@@ -124,6 +124,7 @@ export class BakePlanSettingsDto implements BakePlanSettings {
 
   @ApiPropertyOptional({ type: QuietHoursDto, nullable: true, description: 'No hands-on steps inside; null = none' })
   @Clearable()
+  @IsObject({ message: 'Send quiet hours as { from, until }, or null for none.' })
   @ValidateNested()
   @Type(() => QuietHoursDto)
   quietHours?: QuietHoursDto | null;

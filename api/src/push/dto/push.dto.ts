@@ -9,7 +9,7 @@ import {
   type PushTestResponse,
 } from '@peakwise/shared';
 import { Type } from 'class-transformer';
-import { IsDefined, IsString, Matches, MaxLength, MinLength, ValidateNested } from 'class-validator';
+import { IsDefined, IsObject, IsString, Matches, MaxLength, MinLength, ValidateNested } from 'class-validator';
 import { Omittable } from '../../common/dto-helpers.js';
 
 export class PushKeysDto {
@@ -30,6 +30,8 @@ export class CreatePushSubscriptionDto implements CreatePushSubscriptionRequest 
 
   @ApiProperty({ type: PushKeysDto })
   @IsDefined({ message: 'Send the subscription’s keys (p256dh and auth).' })
+  // ValidateNested lets an array through (it checks each item, and [] has none): a 500 at insert.
+  @IsObject({ message: 'Send the subscription’s keys (p256dh and auth).' })
   @ValidateNested()
   @Type(() => PushKeysDto)
   keys: PushKeysDto;
