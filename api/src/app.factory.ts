@@ -25,9 +25,16 @@ export interface CreatedApp {
   logger: Logger;
 }
 
-export function createAdapter(logger: Logger): FastifyAdapter {
+/**
+ * `trustProxy` (TRUST_PROXY): behind a reverse proxy, which hops to believe for the client's
+ * address and scheme (X-Forwarded-For/-Proto). The sign-in brakes count per address and HSTS
+ * follows the scheme; without it every client would share the proxy's address.
+ */
+export function createAdapter(logger: Logger, trustProxy: AppConfig['trustProxy'] = false): FastifyAdapter {
   return new FastifyAdapter({
     loggerInstance: logger,
+    // Fastify takes a hop count too; the adapter's option type leaves numbers out.
+    trustProxy: trustProxy as boolean | string,
     // Honour a caller's request id (a proxy, a test) or make one, so log lines can be followed.
     requestIdHeader: 'x-request-id',
     genReqId: () => randomUUID(),
@@ -65,7 +72,7 @@ export async function createApp(
   const database = openDatabase(config.databaseUrl);
   const app = await NestFactory.create<NestFastifyApplication>(
     AppModule.forRoot(config, database),
-    createAdapter(logger),
+    createAdapter(logger, config.trustProxy),
     {
       ...APP_OPTIONS,
       logger: new NestPinoLogger(logger),

@@ -26,11 +26,10 @@ export interface AppConfig {
    */
   corsOrigins?: string[];
   /**
-   * ALLOW_UNSAFE_DURABILITY=1: start even if PostgreSQL runs with fsync or synchronous_commit off.
-   * Only for a throw-away test cluster (npm test's); otherwise the API refuses, since a crash could
-   * lose writes it already confirmed to a baker (api/src/db/durability.ts).
+   * TRUST_PROXY: which proxies to believe for the client's address and scheme (Fastify's
+   * trustProxy): a hop count, `true`, or addresses/CIDRs separated by commas. Off when left out.
    */
-  allowUnsafeDurability?: boolean;
+  trustProxy?: boolean | number | string;
   /** Delete expired sessions every this many seconds; 0 turns pruning off (tests). */
   sessionPruneSeconds: number;
   /** Outgoing mail (api/src/mail/). */
@@ -109,7 +108,7 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): AppConfig {
     signInFailuresPerAccount: Number(env.SIGN_IN_FAILURES_PER_ACCOUNT ?? 10),
     signInFailureWindowMinutes: Number(env.SIGN_IN_FAILURE_WINDOW_MINUTES ?? 15),
     corsOrigins: parseOrigins(env.CORS_ORIGINS),
-    allowUnsafeDurability: env.ALLOW_UNSAFE_DURABILITY === '1',
+    trustProxy: parseTrustProxy(env.TRUST_PROXY),
     mail: {
       smtpUrl: env.SMTP_URL || 'smtp://127.0.0.1:2525',
       from: env.MAIL_FROM || 'Peakwise <no-reply@peakwise.invalid>',
@@ -154,6 +153,13 @@ function parseOrigins(value: string | undefined): string[] {
       throw new Error(`CORS_ORIGINS: ${item} is not an origin like https://app.example.com`);
   }
   return items.map((item) => item.replace(/\/+$/, ''));
+}
+
+function parseTrustProxy(value: string | undefined): boolean | number | string {
+  const text = (value ?? '').trim();
+  if (text === '' || text === 'false') return false;
+  if (text === 'true') return true;
+  return /^\d+$/.test(text) ? Number(text) : text;
 }
 
 /** A wildcard listen address is no address to put in a link. */

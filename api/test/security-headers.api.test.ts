@@ -84,6 +84,26 @@ describe('other headers', () => {
   });
 });
 
+describe('behind a proxy (TRUST_PROXY)', () => {
+  it('sends HSTS when the trusted proxy says the request came over https, and only then', async () => {
+    const proxied = await createTestApp({ trustProxy: true });
+    const direct = await createTestApp();
+    try {
+      const forwarded = { 'x-forwarded-proto': 'https' };
+      const viaTls = await proxied.app.inject({ method: 'GET', url: '/api/health', headers: forwarded });
+      expect(viaTls.headers['strict-transport-security']).toBe('max-age=31536000; includeSubDomains');
+      const viaHttp = await proxied.app.inject({ method: 'GET', url: '/api/health' });
+      expect(viaHttp.headers['strict-transport-security']).toBeUndefined();
+      // Without TRUST_PROXY the header is anyone's to send, so it is ignored.
+      const spoofed = await direct.app.inject({ method: 'GET', url: '/api/health', headers: forwarded });
+      expect(spoofed.headers['strict-transport-security']).toBeUndefined();
+    } finally {
+      await proxied.close();
+      await direct.close();
+    }
+  });
+});
+
 describe('Cache-Control', () => {
   it('no-store on signed-in JSON, on errors and on CSV exports', async () => {
     const me = await get('/api/account');

@@ -62,6 +62,14 @@ describe('per account, across addresses', () => {
     expectError(await signIn(a, theo.email, 'not the password', home), 401);
   });
 
+  it('knows an IPv6 owner by their /64, as their device changes the rest of the address', async () => {
+    // 2001:db8::/32 is for documentation (RFC 3849).
+    expect((await signIn(a, theo.email, theo.password, '2001:db8:1:2::10')).statusCode).toBe(200);
+    for (let i = 0; i < LIMIT; i++) await signIn(b, theo.email, `guess number ${i}`, attacker(i));
+    expect((await signIn(a, theo.email, theo.password, '2001:db8:1:2:abcd::99')).statusCode).toBe(200);
+    expectError(await signIn(a, theo.email, theo.password, '2001:db8:1:3::10'), 429);
+  });
+
   it('locks an unknown e-mail the same way, so the lock reveals nothing about who has an account', async () => {
     for (let i = 0; i < LIMIT; i++) expectError(await signIn(a, 'nobody@example.com', `guess ${i}`, attacker(i)), 401);
     expectError(await signIn(a, 'nobody@example.com', 'guess', attacker(40)), 429);
@@ -76,6 +84,29 @@ describe('per account, across addresses', () => {
     expectError(await signIn(b, theo.email, 'guess b', attacker(20)), 401);
     expectError(await signIn(b, theo.email, theo.password, attacker(21)), 429);
     expectError(await signIn(a, theo.email, theo.password, attacker(22)), 429);
+  });
+});
+
+describe('behind a proxy (TRUST_PROXY)', () => {
+  it('counts the client address the trusted proxy forwards, not the proxy’s own', async () => {
+    const proxied = await createTestApp({ authAttemptsPerMinute: 2, trustProxy: true });
+    try {
+      const via = (client: string) =>
+        proxied.app.inject({
+          method: 'POST',
+          url: '/api/auth/sign-in',
+          remoteAddress: '10.0.0.2',
+          headers: { 'x-forwarded-for': client },
+          payload: { email: 'x@example.com', password: 'a wrong guess' },
+        });
+      expectError(await via('192.0.2.10'), 401);
+      expectError(await via('192.0.2.10'), 401);
+      expectError(await via('192.0.2.10'), 429);
+      // Another client behind the same proxy has its own allowance.
+      expectError(await via('192.0.2.11'), 401);
+    } finally {
+      await proxied.close();
+    }
   });
 });
 

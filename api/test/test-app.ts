@@ -30,8 +30,6 @@ export function testConfig(overrides: Partial<AppConfig> = {}): AppConfig {
     // code path is the same.
     passwordHashCost: 14,
     sessionPruneSeconds: 0,
-    // The test cluster runs without fsync for speed; durability.api.test.ts checks the refusal.
-    allowUnsafeDurability: true,
     // Suites sign in hundreds of times from one address; throttle.api.test.ts tests the brake.
     authAttemptsPerMinute: 100_000,
     // Nothing listens on port 9: a test that reads mail starts its own fake (test/mail-fixture.ts).
@@ -59,7 +57,7 @@ export async function createTestApp(
   const database = openDatabase(config.databaseUrl, 4);
   const logger = pino({ level: config.logLevel });
   const moduleRef = await Test.createTestingModule({ imports: [AppModule.forRoot(config, database)] }).compile();
-  const app = moduleRef.createNestApplication<NestFastifyApplication>(createAdapter(logger), {
+  const app = moduleRef.createNestApplication<NestFastifyApplication>(createAdapter(logger, config.trustProxy), {
     ...APP_OPTIONS,
     logger: false,
   });

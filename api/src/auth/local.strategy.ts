@@ -9,7 +9,7 @@ import { SignInLimitsService } from './throttle/sign-in-limits.service.js';
 /** One message for a wrong e-mail and a wrong password, so sign-in does not reveal who has an account. */
 export const BAD_CREDENTIALS = 'E-mail or password is incorrect.';
 
-export const ACCOUNT_DISABLED = 'This account has been disabled. Ask an administrator of this Peakwise to enable it.';
+export const ACCOUNT_DISABLED = 'This account has been disabled. Ask an administrator to enable it again.';
 
 @Injectable()
 export class LocalStrategy extends PassportStrategy(Strategy) {

@@ -1,4 +1,5 @@
 import { Inject, Injectable } from '@nestjs/common';
+import { normalizeIp } from '@nestjs/throttler';
 import { APP_CONFIG, type AppConfig } from '../../config.js';
 import { AuthThrottleRepository } from './auth-throttle.repository.js';
 import { throttleKey } from './pg-throttler.storage.js';
@@ -39,7 +40,7 @@ export class SignInLimitsService {
   async checkAllowed(email: string, address: string): Promise<void> {
     const count = await this.repository.peek(this.key(email));
     if (count.hits < this.limit) return;
-    if (await this.repository.isKnownAddress(email, address)) return;
+    if (await this.repository.isKnownAddress(email, normalizeIp(address))) return;
     throw new TooManyAttemptsException(
       'Too many failed sign-ins to this account. Wait a while, or sign in from a device you have used before.',
       Math.max(1, count.secondsToExpire),
@@ -52,7 +53,9 @@ export class SignInLimitsService {
   }
 
   async recordSuccess(accountId: string, address: string): Promise<void> {
-    await this.repository.rememberAddress(accountId, address);
+    // An IPv6 address is kept as its /64, as the address brake counts it: devices change the
+    // rest of it every day or so (RFC 8981 temporary addresses).
+    await this.repository.rememberAddress(accountId, normalizeIp(address));
   }
 
   private key(email: string): string {
