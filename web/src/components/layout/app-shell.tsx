@@ -6,6 +6,7 @@ import { useTheme } from '@mui/material/styles';
 import useMediaQuery from '@mui/material/useMediaQuery';
 import { Outlet, useNavigation } from 'react-router-dom';
 import { BottomNav } from './bottom-nav';
+import { OutboxIndicator } from './outbox-indicator';
 import { SideRail } from './side-rail';
 import { TopBar } from './top-bar';
 
@@ -32,6 +33,7 @@ export function AppShell() {
       {wide && <SideRail />}
       <Box component="main" sx={{ flexGrow: 1, minWidth: 0, pb: wide ? 4 : BOTTOM_NAV_SPACE }}>
         <Toolbar />
+        <OutboxIndicator place="page" />
         <Container maxWidth="md" sx={{ pt: { xs: 2.5, md: 4 } }}>
           <Outlet />
         </Container>

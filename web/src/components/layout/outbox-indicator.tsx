@@ -12,6 +12,8 @@ import ListItem from '@mui/material/ListItem';
 import ListItemText from '@mui/material/ListItemText';
 import Stack from '@mui/material/Stack';
 import Typography from '@mui/material/Typography';
+import { useTheme } from '@mui/material/styles';
+import useMediaQuery from '@mui/material/useMediaQuery';
 import { useState } from 'react';
 import { useNavigate } from 'react-router-dom';
 import { useSignedInAccount } from '@/lib/auth/use-signed-in-account';
@@ -21,36 +23,63 @@ import { KIND_LABEL, type OutboxEntry } from '@/lib/outbox/outbox-types';
 import { notYetSentWords, useOnline, useOutbox } from '@/lib/outbox/use-outbox';
 
 /**
- * The top bar's word on writes kept on this device: "Offline", or "3 not yet sent" opening the
- * list, where a write the server refused can be opened or discarded. Nothing when all is sent.
+ * The word on writes kept on this device: "Offline", or "3 not yet sent" opening the list, where
+ * a write the server refused can be opened or discarded. Nothing when all is sent. In the top
+ * bar from tablet width up (`place="bar"`); on a phone the bar has no room, so it is a strip at
+ * the top of the page instead (`place="page"`).
  */
-export function OutboxIndicator() {
+export function OutboxIndicator({ place }: { place: 'bar' | 'page' }) {
   const account = useSignedInAccount();
+  const theme = useTheme();
+  const phone = useMediaQuery(theme.breakpoints.down('sm'), { noSsr: true });
   const online = useOnline();
   const outbox = useOutbox(account.id);
   const [open, setOpen] = useState(false);
   const count = outbox.entries.length;
-  if (count === 0 && online) return null;
+  if ((count === 0 && online) || phone !== (place === 'page')) return null;
 
-  const Icon = outbox.failed > 0 ? SyncProblem : online ? CloudUploadOutlined : CloudOffOutlined;
+  const failed = outbox.failed > 0;
+  const Icon = failed ? SyncProblem : online ? CloudUploadOutlined : CloudOffOutlined;
+  const words = count === 0 ? 'Offline' : notYetSentWords(count);
   return (
     <>
-      <Button
-        color="inherit"
-        size="small"
-        variant="outlined"
-        startIcon={<Icon />}
-        onClick={() => setOpen(true)}
-        data-testid="outbox-indicator"
-        sx={{
-          borderRadius: 5,
-          whiteSpace: 'nowrap',
-          borderColor: outbox.failed > 0 ? 'secondary.main' : 'rgba(255,255,255,0.5)',
-          color: outbox.failed > 0 ? 'secondary.main' : 'inherit',
-        }}
-      >
-        {count === 0 ? 'Offline' : notYetSentWords(count)}
-      </Button>
+      {place === 'bar' ? (
+        <Button
+          color="inherit"
+          size="small"
+          variant="outlined"
+          startIcon={<Icon />}
+          onClick={() => setOpen(true)}
+          data-testid="outbox-indicator"
+          sx={{
+            borderRadius: 5,
+            whiteSpace: 'nowrap',
+            borderColor: failed ? 'secondary.main' : 'rgba(255,255,255,0.5)',
+            color: failed ? 'secondary.main' : 'inherit',
+          }}
+        >
+          {words}
+        </Button>
+      ) : (
+        <Button
+          fullWidth
+          color={failed ? 'error' : 'primary'}
+          startIcon={<Icon />}
+          onClick={() => setOpen(true)}
+          data-testid="outbox-indicator"
+          sx={{
+            justifyContent: 'flex-start',
+            borderRadius: 0,
+            px: 2,
+            py: 1,
+            bgcolor: failed ? 'rgba(211, 47, 47, 0.08)' : 'rgba(47, 72, 88, 0.08)',
+            borderBottom: 1,
+            borderColor: 'divider',
+          }}
+        >
+          {count === 0 ? 'Offline: what you save is kept on this device' : `${words} · saved on this device`}
+        </Button>
+      )}
       <OutboxDialog open={open} onClose={() => setOpen(false)} entries={outbox.entries} online={online} />
     </>
   );

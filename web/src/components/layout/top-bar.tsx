@@ -21,7 +21,7 @@ export function TopBar() {
           <Wordmark onDark />
         </Link>
         <Box sx={{ flexGrow: 1 }} />
-        <OutboxIndicator />
+        <OutboxIndicator place="bar" />
         <AlertBell />
         <AccountMenu />
       </Toolbar>

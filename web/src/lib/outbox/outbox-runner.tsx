@@ -2,8 +2,10 @@ import Alert from '@mui/material/Alert';
 import Snackbar from '@mui/material/Snackbar';
 import { useQueryClient } from '@tanstack/react-query';
 import { useEffect, useState } from 'react';
+import { isApiError } from '../api-client';
 import { useCurrentAccount } from '../auth/current-account';
 import { onHeld, startOutbox } from './outbox';
+import { retryDelay } from './replay';
 import { notYetSentWords, useOnline, useOutbox } from './use-outbox';
 
 /**
@@ -37,10 +39,19 @@ export function OutboxRunner() {
     [],
   );
 
-  // Opened offline: the account is not known yet (its check waits for the network), so the
-  // shell with its indicator cannot show. Say what is kept here instead of a lone spinner.
-  const startingOffline = !online && account.data === undefined;
+  // Opened without a connection: the account is not known yet (its check failed or waits for the
+  // network), so the shell with its indicator cannot show. Say what is kept here instead, and
+  // keep asking, with the outbox's backoff, so the writes go out once the server answers. (A
+  // reloaded page may claim to be online while nothing gets through: the failed check counts.)
+  const unreachable = isApiError(account.error) && account.error.status === 0;
+  const startingOffline = account.data === undefined && (!online || unreachable);
   const count = outbox.entries.length;
+  const { refetch, errorUpdateCount } = account;
+  useEffect(() => {
+    if (!unreachable) return;
+    const timer = setTimeout(() => void refetch(), retryDelay(Math.max(1, errorUpdateCount)));
+    return () => clearTimeout(timer);
+  }, [unreachable, refetch, errorUpdateCount]);
 
   return (
     <>
@@ -48,19 +59,22 @@ export function OutboxRunner() {
         <Alert
           severity="info"
           role="status"
-          sx={{ position: 'fixed', top: 8, insetInline: 8, zIndex: (t) => t.zIndex.snackbar, boxShadow: 2 }}
+          data-testid="outbox-offline-start"
+          sx={{ position: 'fixed', bottom: 8, insetInline: 8, zIndex: (t) => t.zIndex.snackbar, boxShadow: 2 }}
         >
+          {online ? 'Peakwise cannot be reached right now. ' : 'You are offline. '}
           {count > 0
-            ? `You are offline. ${notYetSentWords(count)}: kept on this device, sent when you are back online.`
-            : 'You are offline. Your logbook opens when you are back online.'}
+            ? `${notYetSentWords(count)}: kept on this device and sent when the connection is back.`
+            : 'Your logbook opens when the connection is back.'}
         </Alert>
       )}
       <Snackbar
         open={held !== null}
         autoHideDuration={6000}
         onClose={() => setHeld(null)}
-        anchorOrigin={{ vertical: 'top', horizontal: 'center' }}
-        sx={{ top: { xs: 64, sm: 72 } }}
+        anchorOrigin={{ vertical: 'bottom', horizontal: 'center' }}
+        // Above the phone's bottom navigation.
+        sx={{ bottom: { xs: 'calc(56px + env(safe-area-inset-bottom) + 12px)', md: 24 } }}
       >
         <Alert severity="info" variant="filled" onClose={() => setHeld(null)} data-testid="outbox-held">
           {held}

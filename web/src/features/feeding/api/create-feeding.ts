@@ -2,6 +2,7 @@ import type { CreateFeedingRequest, Feeding } from '@peakwise/shared';
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { api } from '@/lib/api-client';
 import { useCurrentAccount } from '@/lib/auth/current-account';
+import { formatWeights } from '@/lib/format/units';
 import { logbookKeys } from '@/lib/logbook/query-keys';
 import { sendOrHold } from '@/lib/outbox/outbox';
 
@@ -19,19 +20,27 @@ export function createFeeding(
 /** Resolves to the new feeding, or undefined when it was kept in the outbox to send later. */
 export function useCreateFeeding(cultureId: string) {
   const queryClient = useQueryClient();
-  const accountId = useCurrentAccount().data?.id;
+  const account = useCurrentAccount().data;
   return useMutation({
     // Offline the write goes to the outbox instead of waiting for a signal.
     networkMode: 'always',
     mutationFn: ({ body, headers }: { body: CreateFeedingRequest; headers: Record<string, string> }) =>
       sendOrHold(
         {
-          accountId,
+          accountId: account?.id,
           kind: 'feeding',
           path: feedingsPath(cultureId),
           body,
           headers,
           openPath: `/cultures/${encodeURIComponent(cultureId)}`,
+          detail: [
+            body.starterG !== undefined && body.flourG !== undefined && body.waterG !== undefined
+              ? formatWeights([body.starterG, body.flourG, body.waterG], account?.unitSystem ?? 'metric')
+              : body.ratio,
+            body.notes,
+          ]
+            .filter(Boolean)
+            .join(' · '),
           stamped: (savedAt) => ({ ...body, fedAt: body.fedAt ?? savedAt }),
         },
         (h) => createFeeding(cultureId, body, h),

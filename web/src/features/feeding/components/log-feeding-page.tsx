@@ -16,7 +16,9 @@ export function LogFeedingPage({ cultureId }: { cultureId: string }) {
   const culture = useCulture(cultureId);
   const last = useFeedings(cultureId, { limit: 1, order: 'desc' });
 
-  if (culture.isPending || last.isPending) return <PageLoader />;
+  // Offline with no last feeding at hand (its fetch waits for a signal): open with the plain
+  // defaults, so a feeding can still be logged into the outbox.
+  if (culture.isPending || (last.isPending && last.fetchStatus !== 'paused')) return <PageLoader />;
   if (culture.isError) return <LoadError error={culture.error} />;
 
   return (
