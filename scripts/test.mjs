@@ -129,6 +129,8 @@ function startServer(databaseUrl, port, mail, push, s3) {
         DEV_PUSH_URL: push.url,
         ...s3.env,
         NODE_ENV: 'test',
+        // The throw-away test cluster runs without fsync for speed (api/src/db/durability.ts).
+        ALLOW_UNSAFE_DURABILITY: '1',
       },
     });
     server.once('error', reject);

@@ -15,6 +15,7 @@ import { ConfigModule } from './config.module.js';
 import { CultureModule } from './culture/culture.module.js';
 import type { AppConfig } from './config.js';
 import { DatabaseModule } from './db/database.module.js';
+import { DurabilityCheck } from './db/durability.js';
 import type { DatabaseHandle } from './db/database.js';
 import { DevMailModule } from './dev/dev-mail.module.js';
 import { DevPushModule } from './dev/dev-push.module.js';
@@ -62,7 +63,7 @@ export class AppModule {
         CommentModule,
         PhotoModule,
       ],
-      providers: [{ provide: APP_GUARD, useClass: SessionGuard }],
+      providers: [{ provide: APP_GUARD, useClass: SessionGuard }, DurabilityCheck],
     };
   }
 }

@@ -94,6 +94,8 @@ export async function startApi(options: ApiProcessOptions): Promise<ApiProcess> 
       SESSION_SECRET: 'test-only-secret-test-only-secret-0123456789',
       NODE_ENV: 'test',
       LOG_LEVEL: 'warn',
+      // npm test's cluster runs without fsync (durability.ts refuses that otherwise).
+      ALLOW_UNSAFE_DURABILITY: '1',
       WEB_DIST: '',
       DEV_MAIL_URL: '',
       SMTP_URL: options.smtpUrl,

@@ -12,6 +12,7 @@ import type { ErrorResponse, FieldError } from '@peakwise/shared';
 import type { FastifyReply, FastifyRequest } from 'fastify';
 import { STATUS_CODES } from 'node:http';
 import type { Logger } from 'pino';
+import { DATABASE_RETRY_AFTER_SECONDS, isDatabaseUnavailable } from '../db/unavailable.js';
 import { TooManyAttemptsException } from './too-many-attempts.exception.js';
 
 interface ErrorBody {
@@ -62,6 +63,13 @@ export function toErrorResponse(exception: unknown): ErrorResponse {
       ...(details?.length ? { details } : {}),
     };
   }
+  if (isDatabaseUnavailable(exception)) {
+    return {
+      statusCode: HttpStatus.SERVICE_UNAVAILABLE,
+      error: reason(HttpStatus.SERVICE_UNAVAILABLE),
+      message: 'The logbook’s database cannot be reached just now. Nothing was lost; try again in a moment.',
+    };
+  }
   const status = (exception as FastifyError | undefined)?.statusCode;
   if (typeof status === 'number' && status >= 400 && status < 500) {
     return {
@@ -83,6 +91,7 @@ export function toErrorResponse(exception: unknown): ErrorResponse {
  */
 export function frameworkError(error: unknown, _request: FastifyRequest, reply: FastifyReply): void {
   const body = toErrorResponse(error);
+  if (body.statusCode === 503) void reply.header('retry-after', String(DATABASE_RETRY_AFTER_SECONDS));
   void reply.status(body.statusCode).type('application/json; charset=utf-8').send(body);
 }
 
@@ -112,6 +121,9 @@ export class ErrorFilter implements ExceptionFilter {
     const body = toErrorResponse(exception);
     if (exception instanceof TooManyAttemptsException) {
       void reply.header('retry-after', String(exception.retryAfterSeconds));
+    }
+    if (body.statusCode === 503 && isDatabaseUnavailable(exception)) {
+      void reply.header('retry-after', String(DATABASE_RETRY_AFTER_SECONDS));
     }
     if (body.statusCode >= 500) {
       this.logger.error({ err: exception, reqId: request.id }, 'unhandled error');
