@@ -30,6 +30,12 @@ export interface AppConfig {
    * trustProxy): a hop count, `true`, or addresses/CIDRs separated by commas. Off when left out.
    */
   trustProxy?: boolean | number | string;
+  /**
+   * ALLOW_UNSAFE_DURABILITY=1: start even if PostgreSQL runs with fsync or synchronous_commit off.
+   * Only for a throw-away test cluster (npm test's); otherwise the API refuses, since a crash could
+   * lose writes it already confirmed to a baker (api/src/db/durability.ts).
+   */
+  allowUnsafeDurability?: boolean;
   /** Delete expired sessions every this many seconds; 0 turns pruning off (tests). */
   sessionPruneSeconds: number;
   /** Outgoing mail (api/src/mail/). */
@@ -109,6 +115,7 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): AppConfig {
     signInFailureWindowMinutes: Number(env.SIGN_IN_FAILURE_WINDOW_MINUTES ?? 15),
     corsOrigins: parseOrigins(env.CORS_ORIGINS),
     trustProxy: parseTrustProxy(env.TRUST_PROXY),
+    allowUnsafeDurability: env.ALLOW_UNSAFE_DURABILITY === '1',
     mail: {
       smtpUrl: env.SMTP_URL || 'smtp://127.0.0.1:2525',
       from: env.MAIL_FROM || 'Peakwise <no-reply@peakwise.invalid>',

@@ -30,6 +30,8 @@ export function testConfig(overrides: Partial<AppConfig> = {}): AppConfig {
     // code path is the same.
     passwordHashCost: 14,
     sessionPruneSeconds: 0,
+    // The test cluster runs without fsync for speed; durability.api.test.ts checks the refusal.
+    allowUnsafeDurability: true,
     // Suites sign in hundreds of times from one address; throttle.api.test.ts tests the brake.
     authAttemptsPerMinute: 100_000,
     // Nothing listens on port 9: a test that reads mail starts its own fake (test/mail-fixture.ts).
