@@ -150,10 +150,10 @@ describe('while the first request with a key is still running', () => {
     expect(await feedingCount()).toBe(1);
   });
 
-  it('a claim nothing finished for two minutes (the server died) is taken over by a retry', async () => {
+  it('a claim nothing finished for two minutes (the server died) is taken over by a retry, which finds the feeding already made', async () => {
     const key = randomUUID();
     const first = await post(feedingsUrl(), FEEDING, key);
-    // What a process that died after claiming leaves: the claim without a response.
+    // What a process that died after the feeding committed leaves: the claim without a response.
     await t.db.updateTable('idempotencyKey').set({ statusCode: null, responseBody: null, completedAt: null }).execute();
     expectError(await post(feedingsUrl(), FEEDING, key), 409);
     await t.db
@@ -162,7 +162,28 @@ describe('while the first request with a key is still running', () => {
       .execute();
     const retry = await post(feedingsUrl(), FEEDING, key);
     expect(retry.statusCode).toBe(201);
-    expect(retry.json<Feeding>().id).not.toBe(first.json<Feeding>().id);
+    // The handler ran again, but the feeding keeps its key (WriteKey): no second feeding.
+    expect(retry.json<Feeding>()).toEqual(first.json<Feeding>());
+    expect(await feedingCount()).toBe(1);
+  });
+
+  it('taken over after a crash before the write committed, the retry makes the feeding', async () => {
+    const key = randomUUID();
+    // A claim the dead process left before its insert: nothing was written.
+    await post(feedingsUrl(), FEEDING, key);
+    await t.db.deleteFrom('feeding').execute();
+    await t.db
+      .updateTable('idempotencyKey')
+      .set({
+        statusCode: null,
+        responseBody: null,
+        completedAt: null,
+        createdAt: sql<Date>`now() - interval '3 minutes'`,
+      })
+      .execute();
+    const retry = await post(feedingsUrl(), FEEDING, key);
+    expect(retry.statusCode).toBe(201);
+    expect(await feedingCount()).toBe(1);
   });
 });
 
@@ -247,11 +268,17 @@ describe('keys belong to one account', () => {
 });
 
 describe('keys are kept 7 days, then swept', () => {
-  const age = (interval: string) =>
-    t.db
+  // Time passes for the keys and for the rows their writes made (a feeding remembers its key).
+  const age = async (interval: string) => {
+    await t.db
       .updateTable('idempotencyKey')
       .set({ createdAt: sql<Date>`now() - ${interval}::interval` })
       .execute();
+    await t.db
+      .updateTable('feeding')
+      .set({ createdAt: sql<Date>`now() - ${interval}::interval` })
+      .execute();
+  };
   const sweeper = () => t.app.get(IdempotencySweeper, { strict: false });
 
   it('replays a key 6 days 23 hours old, and the sweep keeps it', async () => {

@@ -211,6 +211,7 @@ export interface Feeding {
   flour: string | null;
   flourG: number;
   id: Generated<string>;
+  idempotencyKey: string | null;
   initialHeightMm: number | null;
   notes: string | null;
   observations: Generated<string[]>;
@@ -313,6 +314,7 @@ export interface RiseCheck {
   feedingId: string;
   heightMm: number;
   id: Generated<string>;
+  idempotencyKey: string | null;
   takenAt: Timestamp;
   temperatureC: number | null;
   updatedAt: Generated<Timestamp>;

@@ -5,6 +5,7 @@ import type { AccountRecord } from '../account/account.repository.js';
 import { CurrentAccount } from '../common/auth.decorators.js';
 import { IdParam } from '../common/id-param.js';
 import { Idempotent } from '../common/idempotency/idempotency.interceptor.js';
+import { WriteKey } from '../common/idempotency/write-key.decorator.js';
 import { CreateFeedingDto, UpdateFeedingDto } from './dto/feeding.dto.js';
 import { FeedingListView, FeedingView } from './dto/feeding.view.js';
 import { ListFeedingsQuery } from './dto/list-feedings.query.js';
@@ -24,8 +25,9 @@ export class FeedingController {
     @CurrentAccount() account: AccountRecord,
     @IdParam('cultureId') cultureId: string,
     @Body() body: CreateFeedingDto,
+    @WriteKey() key: string | null,
   ): Promise<Feeding> {
-    return this.service.create(account, cultureId, body);
+    return this.service.create(account, cultureId, body, key);
   }
 
   @Get('cultures/:cultureId/feedings')

@@ -1,3 +1,4 @@
+import { IDEMPOTENCY_KEY_TTL_DAYS } from '@peakwise/shared';
 import { Inject, Injectable } from '@nestjs/common';
 import type { FeedingObservation, SortOrder } from '@peakwise/shared';
 import { sql, type Insertable, type Selectable, type Updateable } from 'kysely';
@@ -51,7 +52,23 @@ export class FeedingRepository {
     return { items, total: Number(count.n) };
   }
 
-  insert(feeding: NewFeeding): Promise<FeedingRow> {
+  /**
+   * With an idempotencyKey the culture has had on a feeding for less than the key's lifetime,
+   * nothing is inserted and that feeding comes back: the same write run a second time (WriteKey).
+   * No race: the Idempotency-Key claim lets only one request with a key run at a time.
+   */
+  async insert(feeding: NewFeeding): Promise<FeedingRow> {
+    if (feeding.idempotencyKey) {
+      const earlier = await this.db
+        .selectFrom('feeding')
+        .selectAll()
+        .where('cultureId', '=', feeding.cultureId)
+        .where('idempotencyKey', '=', feeding.idempotencyKey)
+        .where('createdAt', '>', sql<Date>`now() - make_interval(days => ${IDEMPOTENCY_KEY_TTL_DAYS})`)
+        .$castTo<FeedingRow>()
+        .executeTakeFirst();
+      if (earlier) return earlier;
+    }
     return this.db.insertInto('feeding').values(feeding).returningAll().$castTo<FeedingRow>().executeTakeFirstOrThrow();
   }
 

@@ -31,7 +31,12 @@ export class FeedingService {
     return row;
   }
 
-  async create(account: AccountRecord, cultureId: string, request: CreateFeedingRequest): Promise<Feeding> {
+  async create(
+    account: AccountRecord,
+    cultureId: string,
+    request: CreateFeedingRequest,
+    writeKey: string | null = null,
+  ): Promise<Feeding> {
     await this.cultures.requireOwned(account, cultureId);
     const { starterG, flourG, waterG } = requestedGrams(request);
     if (starterG === undefined || flourG === undefined || waterG === undefined) {
@@ -49,6 +54,7 @@ export class FeedingService {
       initialHeightMm: request.initialHeightMm,
       notes: request.notes,
       observations: request.observations,
+      idempotencyKey: writeKey,
     });
     await this.alerts.refreshCulture(cultureId);
     return toFeeding(row);

@@ -5,6 +5,7 @@ import type { AccountRecord } from '../account/account.repository.js';
 import { CurrentAccount } from '../common/auth.decorators.js';
 import { IdParam } from '../common/id-param.js';
 import { Idempotent } from '../common/idempotency/idempotency.interceptor.js';
+import { WriteKey } from '../common/idempotency/write-key.decorator.js';
 import { ListRiseChecksQuery } from './dto/list-rise-checks.query.js';
 import { CreateRiseCheckDto, UpdateRiseCheckDto } from './dto/rise-check.dto.js';
 import { RiseCheckListView, RiseCheckView } from './dto/rise-check.view.js';
@@ -24,8 +25,9 @@ export class RiseCheckController {
     @CurrentAccount() account: AccountRecord,
     @IdParam('feedingId') feedingId: string,
     @Body() body: CreateRiseCheckDto,
+    @WriteKey() key: string | null,
   ): Promise<RiseCheck> {
-    return this.service.create(account, feedingId, body);
+    return this.service.create(account, feedingId, body, key);
   }
 
   @Get('feedings/:feedingId/rise-checks')

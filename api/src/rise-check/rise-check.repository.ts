@@ -1,3 +1,4 @@
+import { IDEMPOTENCY_KEY_TTL_DAYS } from '@peakwise/shared';
 import { Inject, Injectable } from '@nestjs/common';
 import { sql, type Insertable, type Selectable, type Updateable } from 'kysely';
 import { DATABASE } from '../db/database.module.js';
@@ -49,7 +50,18 @@ export class RiseCheckRepository {
     return { items, total: Number(count.n) };
   }
 
-  insert(check: Insertable<RiseCheck>): Promise<RiseCheckRow> {
+  /** With an idempotencyKey the feeding has had on a check within the key's lifetime, that check comes back (WriteKey). */
+  async insert(check: Insertable<RiseCheck>): Promise<RiseCheckRow> {
+    if (check.idempotencyKey) {
+      const earlier = await this.db
+        .selectFrom('riseCheck')
+        .selectAll()
+        .where('feedingId', '=', check.feedingId)
+        .where('idempotencyKey', '=', check.idempotencyKey)
+        .where('createdAt', '>', sql<Date>`now() - make_interval(days => ${IDEMPOTENCY_KEY_TTL_DAYS})`)
+        .executeTakeFirst();
+      if (earlier) return earlier;
+    }
     return this.db.insertInto('riseCheck').values(check).returningAll().executeTakeFirstOrThrow();
   }
 

@@ -29,13 +29,24 @@ export class RiseCheckService {
     return row;
   }
 
-  async create(account: AccountRecord, feedingId: string, request: CreateRiseCheckRequest): Promise<RiseCheck> {
+  async create(
+    account: AccountRecord,
+    feedingId: string,
+    request: CreateRiseCheckRequest,
+    writeKey: string | null = null,
+  ): Promise<RiseCheck> {
     const feeding = await this.feedings.requireOwned(account, feedingId);
     const takenAt = request.takenAt ?? new Date().toISOString();
     requireNotBeforeFeeding(feeding.fedAt, [{ field: 'takenAt', at: takenAt }]);
     const heightMm = requestedHeightMm(request, feeding.initialHeightMm);
     if (heightMm === undefined) throw new Error('CreateRiseCheckDto let a rise check through without a height');
-    const row = await this.checks.insert({ feedingId, takenAt, heightMm, temperatureC: request.temperatureC });
+    const row = await this.checks.insert({
+      feedingId,
+      takenAt,
+      heightMm,
+      temperatureC: request.temperatureC,
+      idempotencyKey: writeKey,
+    });
     await this.alerts.refreshCulture(feeding.cultureId);
     return toRiseCheck(row);
   }
