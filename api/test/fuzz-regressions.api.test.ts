@@ -67,6 +67,19 @@ describe('NUL in text', () => {
   });
 });
 
+describe('half a UTF-16 pair in text', () => {
+  // Before: 500 (validator's isEmail calls encodeURI, which throws URIError on a lone surrogate).
+  it('is refused in an e-mail address, naming it', async () => {
+    const res = await t.app.inject({
+      method: 'POST',
+      url: '/api/auth/password-reset',
+      headers: { 'content-type': 'application/json' },
+      payload: '{"email":"\\ud800@example.com"}',
+    });
+    expect(expectError(res, 400).details?.map((d) => d.field)).toEqual(['email']);
+  });
+});
+
 describe('keys named like Object.prototype members', () => {
   // Before: class-validator's whitelist let __defineGetter__ and "prototype" through as if
   // declared: the PATCH (and every other write) answered 2xx and wrote.

@@ -16,13 +16,21 @@ export function fieldError(field: string, message: string): BadRequestException 
   return new BadRequestException({ message: 'Some fields need another look.', details: [{ field, message }] });
 }
 
+/**
+ * Half of a UTF-16 pair on its own (JSON can carry "\ud800"): no character at all, it cannot be
+ * written as UTF-8, and validator's isEmail threw on it (encodeURI), a 500.
+ */
+const LONE_SURROGATE = /[\ud800-\udbff](?![\udc00-\udfff])|(?<![\ud800-\udbff])[\udc00-\udfff]/;
+const BROKEN_TEXT = 'This text has a broken character (half of a UTF-16 pair); type it again.';
+
 /** Deeper than any request of ours, and far from where recursive framework code overflows. */
 export const MAX_INPUT_DEPTH = 32;
 
 /**
  * What no body, path or query value may hold, whatever its DTO says, found in one walk before
  * class-transformer and class-validator see it (both recurse, and a body nested 10,000 deep
- * overflowed the stack: a 500); text with NUL, which PostgreSQL cannot store (another 500); and
+ * overflowed the stack: a 500); text with NUL, which PostgreSQL cannot store (another 500), or
+ * with a lone surrogate (a 500 in isEmail); and
  * keys named like Object.prototype's members (toString, __defineGetter__, constructor…) or
  * "prototype", which class-validator's whitelist let through as if declared, so a write with them
  * went through.
@@ -34,6 +42,7 @@ export function screenInput(value: unknown, root: string | null): FieldError | n
     const { value: current, field, depth } = work.pop()!;
     if (typeof current === 'string') {
       if (current.includes('\u0000')) return { field: field ?? 'body', message: 'Remove the NUL character (\\u0000).' };
+      if (LONE_SURROGATE.test(current)) return { field: field ?? 'body', message: BROKEN_TEXT };
       continue;
     }
     if (current === null || typeof current !== 'object') continue;
@@ -42,7 +51,7 @@ export function screenInput(value: unknown, root: string | null): FieldError | n
     }
     for (const [key, child] of Object.entries(current)) {
       const path = field === null ? key : `${field}.${key}`;
-      if (key in Object.prototype || key === 'prototype' || key.includes('\u0000')) {
+      if (key in Object.prototype || key === 'prototype' || key.includes('\u0000') || LONE_SURROGATE.test(key)) {
         return { field: path, message: 'Not a field of this request.' };
       }
       work.push({ value: child, field: path, depth: depth + 1 });
