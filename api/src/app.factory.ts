@@ -135,7 +135,23 @@ export async function configureApp(
   SwaggerModule.setup('api/docs', app, document, { jsonDocumentUrl: 'api/docs/openapi.json' });
 
   if (config.webDist) {
-    app.useStaticAssets({ root: config.webDist, prefix: '/' });
+    app.useStaticAssets({
+      root: config.webDist,
+      prefix: '/',
+      // web/scripts/compress-dist.mjs leaves .br and .gz copies beside the build's text files.
+      preCompressed: true,
+      // Our own Cache-Control below, not the plugin's max-age=0.
+      cacheControl: false,
+      setHeaders: (res, path) => {
+        // Vite names every file under assets/ by its content: it can be kept for a year. The
+        // page itself (and the service worker) must be asked for again each time.
+        const value = /[\\/]assets[\\/]/.test(path) ? 'public, max-age=31536000, immutable' : 'no-cache';
+        // Nest's types name Node's response; @fastify/static 10 hands over the Fastify reply.
+        const target = res as unknown as { header?: (n: string, v: string) => unknown };
+        if (typeof target.header === 'function') target.header('cache-control', value);
+        else res.setHeader('cache-control', value);
+      },
+    });
   }
 
   fastify.addHook('onClose', async () => {
