@@ -162,6 +162,14 @@ const ACCOUNT_ROUTES: Record<string, MatrixRoute> = {
     body: () => ({ role: 'baker' }),
     reveals: { admin: ['account'] },
   },
+  // Enabling: a disabling body would sign baker A out partway through the matrix.
+  'PATCH /api/admin/accounts/:id/status': {
+    access: ADMIN_ONLY,
+    on: 'objects',
+    path: (o) => `/api/admin/accounts/${o.accountId}/status`,
+    body: () => ({ disabled: false }),
+    reveals: { admin: ['account'] },
+  },
 };
 
 // Web push: the key is the same for everyone signed in; a device belongs to its account alone.

@@ -36,6 +36,7 @@ it('documents every route under /api', async () => {
       '/api/account/export.json',
       '/api/admin/accounts',
       '/api/admin/accounts/{id}/role',
+      '/api/admin/accounts/{id}/status',
       '/api/account/alert-preferences',
       '/api/alerts',
       '/api/alerts/unread-count',
