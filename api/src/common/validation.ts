@@ -89,7 +89,9 @@ class ScreeningValidationPipe extends ValidationPipe {
     const whole = metadata.data === undefined;
     if (metadata.type === 'body' && whole && (value === undefined || value === null) && isDto(metadata.metatype)) {
       // No JSON body at all: none sent, `null`, or another type's parser left it unread (multipart
-      // is parsed for every route, since uploads exist). Taken as {} it made an empty PATCH a 200.
+      // is parsed for every route, since uploads exist). Checked as {} it names the required
+      // fields, as before; where none is required, {} passed and an empty PATCH answered 200.
+      await super.transform({}, metadata);
       throw refuse({ field: 'body', message: 'Send a JSON object, as application/json.' });
     }
     if (metadata.type === 'body' || metadata.type === 'param' || metadata.type === 'query') {
