@@ -4,7 +4,6 @@
 import {
   dilution,
   fitCultureKinetics,
-  fitRise,
   growthModels,
   predictNextPeak,
   type Culture,
@@ -20,6 +19,7 @@ import {
   type RunningFeeding,
   type TemperatureSample,
 } from '@peakwise/shared';
+import { fitRiseRemembered } from './rise-memo.js';
 
 export interface SummaryRiseCheck {
   at: string;
@@ -53,11 +53,15 @@ const mean = (xs: number[]): number | undefined =>
 
 const hoursSince = (fedAt: string, at: string): number => (Date.parse(at) - Date.parse(fedAt)) / MS_PER_HOUR;
 
-/** fitRise on a feeding's own rise checks; without an initial height there is nothing to fit. */
+/** fitRise on a feeding's own rise checks (remembered, rise-memo.ts); without an initial height there is nothing to fit. */
 export function riseOf(h: FeedingHistory): RiseResult | null {
   const { fedAt, initialHeightMm } = h.feeding;
   if (initialHeightMm === null) return null;
-  return fitRise({ fedAt, initialHeightMm, readings: h.riseChecks.map((r) => ({ at: r.at, heightMm: r.heightMm })) });
+  return fitRiseRemembered({
+    fedAt,
+    initialHeightMm,
+    readings: h.riseChecks.map((r) => ({ at: r.at, heightMm: r.heightMm })),
+  });
 }
 
 /** The feeding's temperature, else the mean of its readings, else of its rise checks' temperatures. */
