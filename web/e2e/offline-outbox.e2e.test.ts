@@ -1,7 +1,7 @@
 import { join } from 'node:path';
 import type { Page } from 'playwright-core';
 import { describe, expect, it } from 'vitest';
-import { baseUrl, RESULTS_DIR } from './browser';
+import { baseUrl, DESKTOP, launchBrowser, RESULTS_DIR } from './browser';
 import { browserPerTest, createCulture, signUp } from './helpers';
 
 // A baker at phone size logs feedings without a signal; they wait on the device and reach the
@@ -72,6 +72,8 @@ describe('offline outbox', () => {
     await page.screenshot({ path: join(RESULTS_DIR, 'offline-saved.png') });
     for (let n = 2; n <= FEEDINGS; n++) await logFeeding(page, cultureId, n);
     await indicator(page).getByText(`${FEEDINGS} not yet sent`, { exact: false }).waitFor();
+    await page.evaluate(() => window.scrollTo(0, 0));
+    await page.screenshot({ path: join(RESULTS_DIR, 'offline-strip.png') });
 
     await indicator(page).click();
     await page.getByRole('dialog', { name: 'Not yet sent' }).waitFor();
@@ -142,4 +144,26 @@ describe('offline outbox', () => {
     expect([...keys.values()].reduce((a, b) => a + b, 0)).toBe(FEEDINGS + lost);
     console.log(`lossy replay: ${FEEDINGS + lost} requests, ${lost} answers lost, ${keys.size} keys`);
   }, 240_000);
+
+  it('on a desk-size screen the top bar says Offline, then how many wait', async () => {
+    const desk = await launchBrowser(DESKTOP);
+    try {
+      const page = await desk.context.newPage();
+      await signUp(page, base, 'Theo Park');
+      const cultureId = await createCulture(page, base, 'Bramble');
+      await page.goto(`${base}/cultures/${cultureId}`);
+      await page.getByRole('link', { name: 'Log feeding' }).first().waitFor();
+      // Until the worker has the shell, a page not opened yet has no code to run offline.
+      await waitForServiceWorker(page);
+      await desk.context.setOffline(true);
+      await page.getByRole('banner').getByTestId('outbox-indicator').getByText('Offline').waitFor();
+      await logFeeding(page, cultureId, 1);
+      await page.getByRole('banner').getByTestId('outbox-indicator').getByText('1 not yet sent').waitFor();
+      await page.screenshot({ path: join(RESULTS_DIR, 'offline-desktop.png') });
+      await desk.context.setOffline(false);
+      await expect.poll(async () => (await serverFeedings(page, cultureId)).total, { timeout: 30_000 }).toBe(1);
+    } finally {
+      await desk.close();
+    }
+  }, 120_000);
 });
