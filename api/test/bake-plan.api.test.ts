@@ -268,4 +268,19 @@ describe('live: check-offs and dough readings', () => {
     const after = (await getPlan(call, view.id)).live;
     expect(Date.parse(step(after, 'bulk-end').startAt)).toBeGreaterThan(Date.parse(step(before, 'bulk-end').startAt));
   });
+
+  it('a dough reading the model cannot carry (0 °C: bulk would never end) leaves the plan readable, saying why', async () => {
+    const formula = await createFormula(call);
+    const view = await created<BakePlanView>(
+      call('POST', '/api/plans', planBody(formula.id, { starter: { skipFeeding: true } })),
+    );
+    await created(call('POST', `/api/plans/${view.id}/steps/mix/done`, { startedAt: iso(NOW) }));
+    clock.set(NOW + HOUR);
+    const before = (await getPlan(call, view.id)).live;
+    await created(call('POST', `/api/plans/${view.id}/readings`, { takenAt: iso(NOW + HOUR), temperatureC: 0 }));
+    const after = await getPlan(call, view.id);
+    expect(step(after.live, 'bulk-end').startAt).toBe(step(before, 'bulk-end').startAt);
+    expect(after.live.warnings.join(' ')).toMatch(/readings put the end of bulk out of reach/);
+    expect(after.readings).toHaveLength(1);
+  });
 });

@@ -1,4 +1,5 @@
 import {
+  BakersMathError,
   PLAN_DEFAULTS,
   replanBake,
   type AliquotReading,
@@ -7,6 +8,7 @@ import {
   type DoughReading,
   type KitchenSummary,
   type LivePlan,
+  type PlanProgress,
   type TemperatureSample,
 } from '@peakwise/shared';
 import type { BakePlanRow, CheckedStepRow, DoughReadingRow, PlanLog } from './bake-plan.repository.js';
@@ -42,7 +44,7 @@ export function livePlan(
     r.risePct === null ? [] : [{ at: r.takenAt.toISOString(), risePct: r.risePct }],
   );
   // The input keeps its creation "now": the planner checks readyAt against it, and it was valid then.
-  return replanBake(row.input, row.timing, {
+  const progress: PlanProgress = {
     now: now.toISOString(),
     done: checked.map((c) => ({
       id: c.stepId,
@@ -52,7 +54,17 @@ export function livePlan(
     doughTemperatures,
     kitchenTemperatures: kitchen.map((k) => ({ at: k.takenAt.toISOString(), c: k.temperatureC })),
     aliquotReadings,
-  });
+  };
+  try {
+    return replanBake(row.input, row.timing, progress);
+  } catch (error) {
+    // A logged value the model cannot carry through (a dough at 0 °C never ends its bulk): the
+    // plan stays readable, without the readings, and says why, so the baker can correct them.
+    if (!(error instanceof BakersMathError)) throw error;
+    const plain = replanBake(row.input, row.timing, { now: progress.now, done: progress.done });
+    const why = `the logged readings put the end of bulk out of reach (${error.message}); the timeline leaves them out until they are corrected`;
+    return { ...plain, warnings: [...plain.warnings, why] };
+  }
 }
 
 /**
