@@ -3,6 +3,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { MATRIX } from './access-matrix.table.js';
 import { requestsFor, type FuzzRequest } from './fuzz-bodies.js';
 import {
+  FUZZ_ONLY,
   NOTHING_TO_FUZZ,
   WRITE_METHODS,
   changedTables,
@@ -29,7 +30,7 @@ const SEED = Number(process.env.FUZZ_SEED ?? 20_261_202);
 const PATH = process.env.FUZZ_PATH;
 
 const isWrite = (key: string) => (WRITE_METHODS as readonly string[]).includes(key.slice(0, key.indexOf(' ')));
-const ROUTES = Object.keys(MATRIX)
+const ROUTES = [...Object.keys(MATRIX), ...Object.keys(FUZZ_ONLY)]
   .filter((key) => isWrite(key) && !(key in NOTHING_TO_FUZZ))
   .sort();
 
