@@ -2,7 +2,7 @@ import { join } from 'node:path';
 import type { Page } from 'playwright-core';
 import { describe, expect, it } from 'vitest';
 import { baseUrl, DESKTOP, launchBrowser, RESULTS_DIR } from './browser';
-import { browserPerTest, createCulture, signUp } from './helpers';
+import { browserPerTest, createCulture, createFeeding, HOUR, signUp } from './helpers';
 
 // A baker at phone size logs feedings without a signal; they wait on the device and reach the
 // server exactly once each, also when the server's answers get lost on the way back.
@@ -144,6 +144,43 @@ describe('offline outbox', () => {
     expect([...keys.values()].reduce((a, b) => a + b, 0)).toBe(FEEDINGS + lost);
     console.log(`lossy replay: ${FEEDINGS + lost} requests, ${lost} answers lost, ${keys.size} keys`);
   }, 240_000);
+
+  it('keeps a rise check made offline, stamped with the moment it was saved', async () => {
+    const page = await browser.context.newPage();
+    await signUp(page, base, 'Theo Park');
+    const cultureId = await createCulture(page, base, 'Bramble');
+    const fedAt = Date.now() - 2 * HOUR;
+    const feedingId = await createFeeding(page, base, cultureId, {
+      fedAt: new Date(fedAt).toISOString(),
+      ratio: '1:1:1',
+      totalG: 150,
+      initialHeightMm: 40,
+    });
+    // Rise check opened once with a signal (its page needs the latest feeding), then back.
+    await page.goto(`${base}/cultures/${cultureId}`);
+    await page.getByRole('link', { name: 'Rise check' }).click();
+    await page.getByRole('button', { name: 'Save rise check' }).waitFor();
+    await waitForServiceWorker(page);
+    await page.goBack();
+    await page.getByRole('link', { name: 'Rise check' }).waitFor();
+
+    await browser.context.setOffline(true);
+    await page.getByRole('link', { name: 'Rise check' }).click();
+    await page.getByLabel(/Height from the jar/).fill('61');
+    const savedAt = Date.now();
+    await page.getByRole('button', { name: 'Save rise check' }).click();
+    await page.waitForURL(`${base}/cultures/${cultureId}`);
+    await indicator(page).getByText('1 not yet sent', { exact: false }).waitFor();
+    // The server only hears of it later; it must not take that later moment as the reading's time.
+    await page.waitForTimeout(3_000);
+
+    await browser.context.setOffline(false);
+    await indicator(page).waitFor({ state: 'detached', timeout: 30_000 });
+    const res = await page.request.get(`${base}/api/feedings/${feedingId}/rise-checks`);
+    const checks = ((await res.json()) as { items: { heightMm: number; takenAt: string }[] }).items;
+    expect(checks.map((c) => c.heightMm)).toEqual([61]);
+    expect(Math.abs(Date.parse(checks[0]!.takenAt) - savedAt)).toBeLessThan(2_000);
+  }, 120_000);
 
   it('on a desk-size screen the top bar says Offline, then how many wait', async () => {
     const desk = await launchBrowser(DESKTOP);

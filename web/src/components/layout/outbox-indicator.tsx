@@ -128,7 +128,7 @@ function OutboxDialog({
                         {entry.detail && <span>{entry.detail}</span>}
                         {entry.state === 'failed' && entry.error && (
                           <Alert severity="error" sx={{ mt: 1 }}>
-                            Not accepted: {entry.error.message}
+                            {entry.error.status === 0 ? entry.error.message : `Not accepted: ${entry.error.message}`}
                           </Alert>
                         )}
                         {entry.state === 'failed' && (

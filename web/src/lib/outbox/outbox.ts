@@ -195,7 +195,7 @@ async function hasWaiting(accountId: string): Promise<boolean> {
   }
 }
 
-async function hold<B>(write: HoldableWrite<B>, key: string, body: B, savedAt: string): Promise<void> {
+async function hold<B>(write: HoldableWrite<B>, key: string, body: B, savedAt: string, tried: boolean): Promise<void> {
   const entry: OutboxEntry = {
     key,
     accountId: write.accountId ?? '',
@@ -205,7 +205,8 @@ async function hold<B>(write: HoldableWrite<B>, key: string, body: B, savedAt: s
     openPath: write.openPath,
     detail: write.detail,
     savedAt,
-    attempts: 0,
+    // A write sent once without an answer counts that try: the server may hold it already.
+    attempts: tried ? 1 : 0,
     state: 'waiting',
   };
   await (await store()).add(entry);
@@ -229,7 +230,7 @@ export async function sendOrHold<B, T>(
   if (!write.accountId) return send(headers);
   const savedAt = new Date().toISOString();
   if (!navigator.onLine || (await hasWaiting(write.accountId))) {
-    await hold(write, key, write.stamped ? write.stamped(savedAt) : write.body, savedAt);
+    await hold(write, key, write.stamped ? write.stamped(savedAt) : write.body, savedAt, false);
     return undefined;
   }
   try {
@@ -237,7 +238,7 @@ export async function sendOrHold<B, T>(
   } catch (error) {
     if (!(isApiError(error) && error.status === 0)) throw error;
     try {
-      await hold(write, key, write.body, savedAt);
+      await hold(write, key, write.body, savedAt, true);
     } catch {
       throw error; // no IndexedDB here: say it did not save, as before
     }

@@ -2,7 +2,7 @@ import 'fake-indexeddb/auto';
 import { describe, expect, it } from 'vitest';
 import { openOutboxStore } from './outbox-db';
 import type { OutboxEntry, SendOutcome } from './outbox-types';
-import { replayRound, retryDelay, verdictOf } from './replay';
+import { KEY_SAFE_MS, replayRound, retryDelay, TOO_OLD_MESSAGE, verdictOf } from './replay';
 
 let dbCount = 0;
 const freshStore = () => openOutboxStore(`outbox-test-${++dbCount}`);
@@ -142,6 +142,29 @@ describe('replayRound', () => {
     });
     expect(seen).toEqual(['mine']);
     expect((await store.list()).map((e) => e.key)).toEqual(['theirs']);
+  });
+});
+
+describe('replayRound near the end of a key’s life', () => {
+  const savedAt = Date.parse('2026-12-02T08:00:00.000Z');
+  const later = savedAt + KEY_SAFE_MS + 60_000;
+
+  it('stops sending a write that was tried without an answer once the server may forget its key', async () => {
+    const store = await freshStore();
+    await store.add(entry('tried', { attempts: 3 }));
+    const send = () => Promise.resolve<SendOutcome>({ ok: true });
+    let sends = 0;
+    const result = await replayRound(store, 'baker-a', () => (sends++, send()), Math.random, later);
+    expect(sends).toBe(0);
+    expect(result).toEqual({ sent: 0, failed: 1 });
+    expect((await store.list())[0]).toMatchObject({ state: 'failed', error: { status: 0, message: TOO_OLD_MESSAGE } });
+  });
+
+  it('still sends a write never tried: its key was never used', async () => {
+    const store = await freshStore();
+    await store.add(entry('untried', { attempts: 0 }));
+    const result = await replayRound(store, 'baker-a', () => Promise.resolve({ ok: true }), Math.random, later);
+    expect(result).toEqual({ sent: 1, failed: 0 });
   });
 });
 

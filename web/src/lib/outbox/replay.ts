@@ -1,3 +1,4 @@
+import { IDEMPOTENCY_KEY_TTL_HOURS } from '@peakwise/shared';
 import type { OutboxEntry, SendOutcome, Verdict } from './outbox-types';
 import type { OutboxStore } from './outbox-db';
 
@@ -25,6 +26,15 @@ export function retryDelay(attempts: number, random: () => number = Math.random)
   return Math.round(base * (0.8 + 0.4 * random()));
 }
 
+/**
+ * The server remembers a key for IDEMPOTENCY_KEY_TTL_HOURS. A write that was tried and never got
+ * an answer may have been stored; sent after its key is forgotten it would be stored twice. An
+ * hour short of that, such a write stops being sent and asks the baker to look first.
+ */
+export const KEY_SAFE_MS = (IDEMPOTENCY_KEY_TTL_HOURS - 1) * 3_600_000;
+export const TOO_OLD_MESSAGE =
+  'Saved over a day ago and perhaps already received. Open the logbook to check before saving it again.';
+
 export interface RoundResult {
   sent: number;
   failed: number;
@@ -42,10 +52,16 @@ export async function replayRound(
   accountId: string,
   send: (entry: OutboxEntry) => Promise<SendOutcome>,
   random: () => number = Math.random,
+  now: number = Date.now(),
 ): Promise<RoundResult> {
   const result: RoundResult = { sent: 0, failed: 0 };
   for (const entry of await store.list(accountId)) {
     if (entry.state !== 'waiting') continue;
+    if (entry.attempts > 0 && now - Date.parse(entry.savedAt) > KEY_SAFE_MS) {
+      await store.put({ ...entry, state: 'failed', error: { status: 0, message: TOO_OLD_MESSAGE } });
+      result.failed += 1;
+      continue;
+    }
     const outcome = await send(entry);
     const verdict = verdictOf(outcome);
     if (verdict === 'sent') {
