@@ -58,7 +58,12 @@ export async function callApi<T = unknown>(
 ): Promise<T> {
   const res = await fetch(`${api.url}${path}`, {
     method,
-    headers: { 'content-type': 'application/json', cookie },
+    // Writes carry a fresh Idempotency-Key, as the web client's do (some routes require one).
+    headers: {
+      'content-type': 'application/json',
+      cookie,
+      ...(method === 'GET' ? {} : { 'idempotency-key': crypto.randomUUID() }),
+    },
     body: JSON.stringify(body),
   });
   const text = await res.text();
