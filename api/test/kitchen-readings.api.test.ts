@@ -90,7 +90,10 @@ describe('a kitchen logger file on a bake', () => {
     // 24 h at one reading per 5 min (the file has one a minute), first at the window's start.
     expect(readings.length).toBeGreaterThan(250);
     // °F → °C (NIST SP 811: t/°C = (t/°F − 32)/1.8): the file's 07:00 row reads 80.5 °F.
-    expect(readings[0]).toEqual({ takenAt: iso(MIX - HOUR), temperatureC: Math.round(((80.5 - 32) / 1.8) * 100) / 100 });
+    expect(readings[0]).toEqual({
+      takenAt: iso(MIX - HOUR),
+      temperatureC: Math.round(((80.5 - 32) / 1.8) * 100) / 100,
+    });
 
     expect(await send(before.id, readings)).toEqual({ added: readings.length, total: readings.length });
     const after = await getPlan(call, before.id);
