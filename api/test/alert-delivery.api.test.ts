@@ -142,7 +142,9 @@ describe('bake plan alerts', () => {
       pending.every((a) => a.kind === 'plan-step' && a.status === 'pending' && a.linkPath === `/bench/${plan.id}`),
     ).toBe(true);
     const fold = pending.find((a) => a.slotKey.endsWith(`:${folds[0]!.id}`));
-    expect(fold?.dueAt.toISOString()).toBe(new Date(folds[0]!.startAt).toISOString());
+    // The alert is planned a moment before the answer's re-plan, and a plan started now moves
+    // with the clock until the mix is checked off: the two may be a second or so apart.
+    expect(Math.abs((fold?.dueAt.getTime() ?? NaN) - Date.parse(folds[0]!.startAt))).toBeLessThanOrEqual(5_000);
 
     await created(call('PATCH', `/api/plans/${plan.id}`, { status: 'cancelled' }), 200);
     const after = await t.db.selectFrom('alert').select('status').where('planId', '=', plan.id).execute();
